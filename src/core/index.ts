@@ -1,0 +1,9 @@
+/**
+ * The engine's public surface. Renderer and CLI import from here (or from a module's index).
+ */
+export * from './errors.ts';
+export * from './util/cancel.ts';
+export * from './graph/index.ts';
+export * from './theory/index.ts';
+export * from './subgraphs/index.ts';
+export * from './inspect/index.ts';
