@@ -23,8 +23,7 @@ export function inverse(a: Series, cap: number): Series {
   const cInv = invertCoefficient(a.coeffs[0]!);
   if (a.coeffs.length === 1 && a.order === Infinity) return Series.monomial(cInv, -v);
   const rel = a.order - v; // relative precision (may be Infinity)
-  const n = Math.min(rel, cap + v);
-  if (n < 0) return Series.bigO(-v - 1).truncate(cap);
+  const n = Math.max(0, Math.min(rel, cap + v));
   // normalized u_i = a_i / c
   const u: Poly[] = [];
   for (let i = 1; i <= n; i++) u.push(i < a.coeffs.length ? a.coeffs[i]!.mul(cInv) : Poly.ZERO);
@@ -45,5 +44,5 @@ export function divide(a: Series, b: Series, cap: number): Series {
   }
   // 1/b is needed through cap − v_a for the product to reach cap.
   const bInv = inverse(b, a.val === Infinity ? cap : cap - a.val);
-  return a.mul(bInv).truncate(Math.max(cap, -Infinity));
+  return a.mul(bInv).truncate(cap);
 }
