@@ -127,7 +127,7 @@ export class Poly {
     const single = this.singleTerm();
     if (single && single.coeff instanceof Rational) return Poly.term(single.coeff.pow(k), powMonomial(single.mono, k));
     let result = Poly.ONE;
-    let base: Poly = this;
+    let base = this as Poly;
     while (k > 0) {
       if (k & 1) result = result.mul(base);
       k >>= 1;

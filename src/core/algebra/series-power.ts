@@ -81,6 +81,9 @@ function rationalRoot(r: Rational, q: number): Rational | undefined {
 
 /** c^y for a single-term coefficient c and an exact rational y. */
 function powCoefficient(c: Poly, y: Rational): Poly {
+  if (y.abs().compare(Rational.int(MAX_EXPONENT)) > 0) {
+    throw new LimitError('exponent', 'maxExponent', MAX_EXPONENT, y.toString(), 'rewrite the expression with smaller powers');
+  }
   if (y.isInteger()) {
     const k = Number(y.n);
     if (k >= 0) return c.pow(k);

@@ -109,9 +109,14 @@ export class Series {
     if (this.coeffs.length === 0) return Series.make(this.val + k, [], this.order + k);
     return new Series(this.val + k, this.coeffs, this.order + k);
   }
-  /** The same series, forgotten beyond ε^k. */
+  /**
+   * The same series, forgotten beyond ε^k — except that an exact Laurent polynomial with no
+   * terms beyond ε^k stays exact (nothing is lost), so constants keep order Infinity.
+   */
   truncate(k: number): Series {
-    return k >= this.order ? this : Series.make(this.val, this.coeffs, k);
+    if (k >= this.order) return this;
+    if (this.order === Infinity && this.top <= k) return this;
+    return Series.make(this.val, this.coeffs, k);
   }
 
   /** Product with precision min(k_a + v_b, k_b + v_a). */

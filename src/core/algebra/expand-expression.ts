@@ -1,0 +1,168 @@
+/**
+ * Evaluating a parsed expression to its Laurent expansion in ε, exact through a requested
+ * order. Every subexpression is computed with a truncation cap; since the series track
+ * their own precision, the result says how far it is known, and when poles have eaten
+ * orders the evaluation is repeated with a larger cap until the requested order is reached.
+ *
+ * Products are evaluated factor by factor, except that Gamma(...) and exp(...) factors of
+ * one product are combined in exponential form (one exp of a sum of log-series).
+ */
+import { CoppiceError, InputError, LimitError } from '../errors.ts';
+import { AlgebraError } from './algebra-error.ts';
+import { EXP_FORM_ONE, expFormToSeries, invertExpForm, mulExpForms, type ExpForm } from './exp-form.ts';
+import { gammaExpForm, splitGammaArgument } from './gamma.ts';
+import { variable } from './monomial.ts';
+import { parseExpression, type ExprNode } from './parse-expression.ts';
+import { Poly } from './polynomial.ts';
+import { divide } from './series-inverse.ts';
+import { logSeries } from './series-exp-log.ts';
+import { powSeries } from './series-power.ts';
+import { Series } from './series.ts';
+import { Rational } from './rational.ts';
+import { MAX_ZETA_ARGUMENT, zetaPoly } from './zeta.ts';
+
+/** Highest order `expand` accepts. */
+export const MAX_EXPANSION_ORDER = 40;
+
+/** Options of `expandExpression`. */
+export interface ExpandOptions {
+  /** Name of the input in error messages (default "expression"). */
+  readonly input?: string;
+  /** Highest order accepted (default MAX_EXPANSION_ORDER = 40). */
+  readonly maxOrder?: number;
+}
+
+/**
+ * The Laurent expansion of an expression (text or parsed), exact through ε^order.
+ * Throws InputError (with the position) for bad or non-exact expressions and LimitError for
+ * requests beyond the limits.
+ */
+export function expandExpression(expr: string | ExprNode, order: number, options: ExpandOptions = {}): Series {
+  const maxOrder = options.maxOrder ?? MAX_EXPANSION_ORDER;
+  if (!Number.isInteger(order)) throw new RangeError(`order must be an integer, got ${order}`);
+  if (Math.abs(order) > maxOrder) {
+    throw new LimitError('expansion order', 'maxOrder', maxOrder, order, `ask for an order between -${maxOrder} and ${maxOrder}`);
+  }
+  const source = typeof expr === 'string' ? expr : undefined;
+  const input = options.input ?? 'expression';
+  const tree = typeof expr === 'string' ? parseExpression(expr, input) : expr;
+  const ctx: Ctx = { source, input };
+  let cap = order;
+  for (let attempt = 0; attempt < 12; attempt++) {
+    const s = evaluate(tree, cap, ctx);
+    if (s.order >= order) return s.truncate(order);
+    cap += order - s.order;
+    if (cap > order + 4 * maxOrder + 40) break;
+  }
+  throw new LimitError('working order needed for the expansion', 'maxWorkingOrder', order + 4 * maxOrder + 40, 'more', 'the expression loses too many orders to poles; simplify it');
+}
+
+interface Ctx {
+  readonly source: string | undefined;
+  readonly input: string;
+}
+
+function located<T>(node: { readonly offset: number }, ctx: Ctx, f: () => T): T {
+  try {
+    return f();
+  } catch (e) {
+    if (e instanceof AlgebraError) throw new InputError(e.message, { input: ctx.input, offset: node.offset, source: ctx.source }, e.hint);
+    if (e instanceof RangeError && !(e instanceof CoppiceError)) {
+      throw new InputError(e.message, { input: ctx.input, offset: node.offset, source: ctx.source });
+    }
+    throw e;
+  }
+}
+
+function evaluate(node: ExprNode, cap: number, ctx: Ctx): Series {
+  return located(node, ctx, () => evaluateHere(node, cap, ctx));
+}
+
+function evaluateHere(node: ExprNode, cap: number, ctx: Ctx): Series {
+  switch (node.kind) {
+    case 'number':
+      return Series.constant(Poly.constant(node.value));
+    case 'eps':
+      return Series.EPS;
+    case 'constant':
+    case 'symbol':
+      return Series.constant(Poly.term(Rational.ONE, variable(node.name)));
+    case 'neg':
+      return evaluate(node.arg, cap, ctx).neg();
+    case 'sum': {
+      let s = Series.ZERO;
+      for (const t of node.terms) {
+        const v = evaluate(t.node, cap, ctx);
+        s = s.add(t.sign === 1 ? v : v.neg());
+      }
+      return s.truncate(cap);
+    }
+    case 'product':
+      return evaluateProduct(node.factors, cap, ctx);
+    case 'power': {
+      const base = evaluate(node.base, cap, ctx);
+      const exponent = evaluate(node.exponent, cap, ctx);
+      return powSeries(base, exponent, cap);
+    }
+    case 'call':
+      return evaluateCall(node, cap, ctx);
+  }
+}
+
+function evaluateCall(node: Extract<ExprNode, { kind: 'call' }>, cap: number, ctx: Ctx): Series {
+  switch (node.fn) {
+    case 'zeta': {
+      const arg = evaluate(node.arg, 0, ctx);
+      const k = arg.isExact() && arg.order === Infinity && arg.val >= 0 && arg.coeffs.length <= 1 ? arg.coeff(0).asRational() : undefined;
+      if (!k || !k.isInteger() || k.n < 2n) {
+        throw new AlgebraError('zeta(k) needs an integer k ≥ 2', 'zeta(1) is the pole of the zeta function; write zeta(3), zeta(4), …');
+      }
+      if (k.n > BigInt(MAX_ZETA_ARGUMENT)) throw new LimitError('zeta argument', 'maxZetaArgument', MAX_ZETA_ARGUMENT, k.n.toString(), `use zeta(k) with k ≤ ${MAX_ZETA_ARGUMENT}`);
+      return Series.constant(zetaPoly(Number(k.n)));
+    }
+    case 'log':
+      return logSeries(evaluate(node.arg, cap, ctx), cap);
+    case 'Gamma':
+    case 'exp':
+      return expFormToSeries(expFormOf(node, cap + 1, ctx), cap);
+  }
+}
+
+/** Γ(x) or exp(x) in exponential form, log-series through ε^cap. */
+function expFormOf(node: Extract<ExprNode, { kind: 'call' }>, cap: number, ctx: Ctx): ExpForm {
+  const arg = evaluate(node.arg, cap, ctx);
+  if (node.fn === 'exp') {
+    if (arg.val < 1 && !arg.isZero()) {
+      throw new AlgebraError(
+        arg.val < 0 ? 'exp of a series with a pole in eps has no Laurent expansion' : 'exp of an argument that does not vanish at eps = 0 is not exact',
+        'exp(...) takes arguments like euler_gamma*eps; move constant factors outside',
+      );
+    }
+    return { prefactor: Poly.ONE, epsPower: 0, log: arg };
+  }
+  const { n, delta } = splitGammaArgument(arg);
+  return gammaExpForm(n, delta, cap);
+}
+
+function evaluateProduct(factors: Extract<ExprNode, { kind: 'product' }>['factors'], cap: number, ctx: Ctx): Series {
+  // Gamma/exp factors gather into one exponential form; headroom for their poles.
+  const special = factors.filter((f) => f.node.kind === 'call' && (f.node.fn === 'Gamma' || f.node.fn === 'exp')).length;
+  let form: ExpForm = EXP_FORM_ONE;
+  let numerator = Series.ONE;
+  let denominator = Series.ONE;
+  for (const f of factors) {
+    const n = f.node;
+    if (n.kind === 'call' && (n.fn === 'Gamma' || n.fn === 'exp')) {
+      const g = located(n, ctx, () => expFormOf(n, cap + special, ctx));
+      form = mulExpForms(form, f.op === '*' ? g : located(n, ctx, () => invertExpForm(g)));
+    } else {
+      const v = evaluate(n, cap + special, ctx);
+      if (f.op === '*') numerator = numerator.mul(v);
+      else denominator = denominator.mul(v);
+    }
+  }
+  const main = form === EXP_FORM_ONE ? Series.ONE : expFormToSeries(form, cap + special);
+  const top = numerator.mul(main);
+  if (denominator === Series.ONE) return top.truncate(cap);
+  return located(factors.find((f) => f.op === '/')!, ctx, () => divide(top, denominator, cap));
+}
