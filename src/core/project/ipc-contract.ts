@@ -1,0 +1,126 @@
+/**
+ * The typed contract between the renderer and the Electron main process: channel names,
+ * payload and reply types, and the API the preload exposes as `window.coppice`. Main
+ * validates every payload against these shapes (src/main/ipc-validate.ts); the renderer
+ * never imports Electron or main code, only these types.
+ */
+
+/** A project file read from disk. */
+export interface OpenedFile {
+  readonly path: string;
+  readonly text: string;
+}
+
+export interface SaveRequest {
+  /** Where to write; absent asks the user (save as). */
+  readonly path?: string;
+  readonly text: string;
+  /** File name proposed in the save dialog. */
+  readonly suggestedName: string;
+}
+
+export interface ExportRequest {
+  readonly text: string;
+  readonly suggestedName: string;
+  /** What is exported, which picks the dialog's file filter. */
+  readonly format: 'latex' | 'tikz' | 'svg' | 'json' | 'text';
+}
+
+/** A graph link (`coppice://graph?notation=…&theory=…`) opened from outside the app. */
+export interface GraphLink {
+  readonly notation: string;
+  readonly theory?: string;
+  readonly name?: string;
+}
+
+/** What the app opens with: the project given on the command line, or a link. */
+export interface Startup {
+  readonly project?: OpenedFile;
+  readonly link?: GraphLink;
+  /** A recovery file left by autosave when the app last stopped with unsaved changes. */
+  readonly recovery?: OpenedFile;
+}
+
+/** Commands the native menu sends to the renderer. */
+export type MenuCommand =
+  | 'new' | 'open' | 'save' | 'save-as' | 'export-json' | 'export-text'
+  | 'undo' | 'redo' | 'delete' | 'select-all' | 'copy-notation' | 'paste-notation'
+  | 'layout' | 'fit' | 'zoom-in' | 'zoom-out' | 'new-graph';
+
+/** The functions the preload puts on `window.coppice`. */
+export interface CoppiceBridge {
+  readonly platform: string;
+  startup(): Promise<Startup>;
+  openProject(): Promise<OpenedFile | null>;
+  /** Saves atomically; returns the path written, or null when the user cancelled. */
+  saveProject(req: SaveRequest): Promise<string | null>;
+  saveProjectAs(req: SaveRequest): Promise<string | null>;
+  exportFile(req: ExportRequest): Promise<string | null>;
+  recentFiles(): Promise<readonly string[]>;
+  openRecent(path: string): Promise<OpenedFile | null>;
+  revealInFolder(path: string): Promise<void>;
+  /** Writes the recovery file (or removes it when `text` is null, after a save). */
+  autosave(text: string | null): Promise<void>;
+  /** Tells main whether there are unsaved changes, for the prompt on closing. */
+  setDirty(dirty: boolean): void;
+  onMenuCommand(listener: (cmd: MenuCommand) => void): () => void;
+  onOpenLink(listener: (link: GraphLink) => void): () => void;
+}
+
+/** Channel names, in one place. Invoke channels answer; send channels do not. */
+export const IPC = {
+  startup: 'coppice:startup',
+  openProject: 'coppice:open-project',
+  saveProject: 'coppice:save-project',
+  saveProjectAs: 'coppice:save-project-as',
+  exportFile: 'coppice:export-file',
+  recentFiles: 'coppice:recent-files',
+  openRecent: 'coppice:open-recent',
+  revealInFolder: 'coppice:reveal-in-folder',
+  autosave: 'coppice:autosave',
+  setDirty: 'coppice:set-dirty',
+  menuCommand: 'coppice:menu-command',
+  openLink: 'coppice:open-link',
+} as const;
+
+export const MENU_COMMANDS: readonly MenuCommand[] = [
+  'new', 'open', 'save', 'save-as', 'export-json', 'export-text', 'undo', 'redo', 'delete', 'select-all',
+  'copy-notation', 'paste-notation', 'layout', 'fit', 'zoom-in', 'zoom-out', 'new-graph',
+];
+
+/** The URL scheme that opens graph links, and the app's own page scheme. */
+export const LINK_SCHEME = 'coppice';
+export const APP_SCHEME = 'coppice-app';
+
+/** Parses `coppice://graph?notation=…&theory=…&name=…`; null when it is not such a link. */
+export function parseGraphLink(url: string): GraphLink | null {
+  const m = /^coppice:\/\/\/?graph\/?\?(.*)$/i.exec(url.trim());
+  if (!m || url.length > 200_000) return null;
+  const params = new Map<string, string>();
+  for (const pair of m[1]!.split('&')) {
+    const eq = pair.indexOf('=');
+    if (eq <= 0) continue;
+    try {
+      params.set(pair.slice(0, eq), decodeURIComponent(pair.slice(eq + 1).replace(/\+/g, ' ')));
+    } catch {
+      return null;
+    }
+  }
+  const notation = params.get('notation');
+  if (!notation || notation.length > 100_000) return null;
+  const theory = params.get('theory');
+  const name = params.get('name');
+  return {
+    notation,
+    ...(theory && /^[A-Za-z0-9_-]{1,64}$/.test(theory) ? { theory } : {}),
+    ...(name ? { name: name.slice(0, 200) } : {}),
+  };
+}
+
+/** A graph link for a notation (the inverse of parseGraphLink). */
+export function graphLink(link: GraphLink): string {
+  const q = [`notation=${encodeURIComponent(link.notation)}`];
+  if (link.theory) q.push(`theory=${encodeURIComponent(link.theory)}`);
+  if (link.name) q.push(`name=${encodeURIComponent(link.name)}`);
+  return `${LINK_SCHEME}://graph?${q.join('&')}`;
+}
