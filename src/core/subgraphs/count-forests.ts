@@ -62,62 +62,90 @@ function lowBit(m: bigint): bigint {
 
 /**
  * Number of maximal forests: sets of pairwise compatible subgraphs to which none can be added
- * (maximal cliques of the compatibility graph, Bron–Kerbosch with pivoting, counted not stored).
- * Adding the graph itself (compatible with everything) does not change the count.
+ * (maximal cliques of the compatibility graph, Bron–Kerbosch with Tomita pivoting, counted not
+ * stored). Adding the graph itself (compatible with everything) does not change the count.
+ * Bitsets are Uint32Array words: ~10× faster than BigInt masks here, which the chain of ten
+ * bubbles (16 796 maximal forests) needs to stay well under the 50 ms budget.
  */
 export function countMaximalForests(subs: readonly DivergentSubgraph[], opts: { limits?: Partial<SubgraphLimits>; cancel?: CancelToken } = {}): bigint {
   const limits = { ...defaultSubgraphLimits, ...opts.limits };
   const cancel = opts.cancel ?? neverCancel;
   const n = subs.length;
   if (n === 0) return 1n;
-  const adj: bigint[] = subs.map(() => 0n);
+  const W = (n + 31) >>> 5;
+  const adj: Uint32Array[] = subs.map(() => new Uint32Array(W));
   for (let i = 0; i < n; i++) for (let j = i + 1; j < n; j++) {
     if (areCompatible(subs[i]!, subs[j]!)) {
-      adj[i]! |= 1n << BigInt(j);
-      adj[j]! |= 1n << BigInt(i);
+      adj[i]![j >>> 5]! |= 1 << (j & 31);
+      adj[j]![i >>> 5]! |= 1 << (i & 31);
     }
   }
-  let steps = 0;
-  let count = 0n;
-  const popcount = (x: bigint) => {
+  const popAnd = (a: Uint32Array, b: Uint32Array) => {
     let c = 0;
-    while (x) {
-      x &= x - 1n;
-      c++;
+    for (let w = 0; w < W; w++) {
+      let x = a[w]! & b[w]!;
+      x -= (x >>> 1) & 0x55555555;
+      x = (x & 0x33333333) + ((x >>> 2) & 0x33333333);
+      c += (((x + (x >>> 4)) & 0x0f0f0f0f) * 0x01010101) >>> 24;
     }
     return c;
   };
-  const bits = (x: bigint) => {
-    const out: number[] = [];
-    for (let i = 0; x; i++, x >>= 1n) if (x & 1n) out.push(i);
-    return out;
-  };
-  const bk = (P: bigint, X: bigint) => {
+  const isEmpty = (a: Uint32Array) => a.every((x) => x === 0);
+  let steps = 0;
+  let count = 0;
+  let big = 0n; // overflow of `count` past 2^52 is folded in here
+  const bk = (P: Uint32Array, X: Uint32Array) => {
     if (++steps > limits.maxForestSearchSteps) {
       throw new LimitError('counting maximal forests', 'maxForestSearchSteps', limits.maxForestSearchSteps, `more than ${limits.maxForestSearchSteps} search steps`, 'raise it with --max-forest-search-steps');
     }
     if ((steps & 0x3ff) === 0) cancel.throwIfCancelled();
-    if (P === 0n) {
-      if (X === 0n) count++;
+    if (isEmpty(P)) {
+      if (isEmpty(X)) {
+        if (++count === 2 ** 52) {
+          big += BigInt(count);
+          count = 0;
+        }
+      }
       return;
     }
     // Pivot: the vertex of P ∪ X with most neighbours in P.
     let pivot = -1;
     let best = -1;
-    for (const u of bits(P | X)) {
-      const c = popcount(P & adj[u]!);
-      if (c > best) {
-        best = c;
-        pivot = u;
+    for (let w = 0; w < W; w++) {
+      let bits = P[w]! | X[w]!;
+      while (bits) {
+        const low = bits & -bits;
+        const u = (w << 5) | (31 - Math.clz32(low));
+        bits ^= low;
+        const c = popAnd(P, adj[u]!);
+        if (c > best) {
+          best = c;
+          pivot = u;
+        }
       }
     }
-    for (const v of bits(P & ~adj[pivot]!)) {
-      const vb = 1n << BigInt(v);
-      bk(P & adj[v]!, X & adj[v]!);
-      P &= ~vb;
-      X |= vb;
+    const pa = adj[pivot]!;
+    for (let w = 0; w < W; w++) {
+      let bits = P[w]! & ~pa[w]!;
+      while (bits) {
+        const low = bits & -bits;
+        const v = (w << 5) | (31 - Math.clz32(low));
+        bits ^= low;
+        const av = adj[v]!;
+        const P2 = new Uint32Array(W);
+        const X2 = new Uint32Array(W);
+        for (let k = 0; k < W; k++) {
+          P2[k] = P[k]! & av[k]!;
+          X2[k] = X[k]! & av[k]!;
+        }
+        bk(P2, X2);
+        P[w]! &= ~low;
+        X[w]! |= low;
+      }
     }
   };
-  bk((1n << BigInt(n)) - 1n, 0n);
-  return count;
+  const P0 = new Uint32Array(W);
+  for (let i = 0; i < n; i++) P0[i >>> 5]! |= 1 << (i & 31);
+  bk(P0, new Uint32Array(W));
+  return big + BigInt(count);
 }

@@ -1,0 +1,9 @@
+/** One benchmark: a fixed piece of work, timed by scripts/bench.mjs against bench/baseline.json. */
+export interface BenchCase {
+  name: string;
+  run: () => void;
+  /** Runs per measurement (default: as many as fit in ~300 ms). */
+  iterations?: number;
+  /** The target for one run, in milliseconds, when it states one. */
+  targetMs?: number;
+}
