@@ -7,3 +7,4 @@ export * from './graph/index.ts';
 export * from './theory/index.ts';
 export * from './subgraphs/index.ts';
 export * from './inspect/index.ts';
+export * from './periods/index.ts';
