@@ -8,3 +8,4 @@ export * from './theory/index.ts';
 export * from './subgraphs/index.ts';
 export * from './inspect/index.ts';
 export * from './periods/index.ts';
+export * from './canon/index.ts';
