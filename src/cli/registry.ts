@@ -1,6 +1,9 @@
 import type { Command } from './command.ts';
 import { inspectCommand } from './commands/inspect.ts';
 import { expandCommand } from './commands/expand.ts';
+import { periodCommand } from './commands/period.ts';
+import { coproductCommand } from './commands/coproduct.ts';
+import { countertermCommand } from './commands/counterterm.ts';
 
 /** Every `coppice` verb. Add a command by writing `commands/<verb>.ts` and listing it here. */
-export const commands: readonly Command[] = [inspectCommand, expandCommand];
+export const commands: readonly Command[] = [inspectCommand, expandCommand, periodCommand, coproductCommand, countertermCommand];

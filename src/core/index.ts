@@ -9,3 +9,4 @@ export * from './subgraphs/index.ts';
 export * from './inspect/index.ts';
 export * from './periods/index.ts';
 export * from './canon/index.ts';
+export * from './hopf/index.ts';

@@ -3,7 +3,7 @@ import type { Edge, Graph, Leg } from '../graph/types.ts';
 import type { FieldSpec, Theory } from './types.ts';
 
 /** Momentum powers carried by a counterterm vertex of each structure. */
-export const COUNTERTERM_STRUCTURES: Readonly<Record<string, number>> = { '': 0, p2: 2, pslash: 1, m2: 0 };
+export const COUNTERTERM_STRUCTURES: Readonly<Record<string, number>> = { '': 0, p: 1, p2: 2, pslash: 1, m2: 0 };
 
 /**
  * A graph checked against its theory: every field resolved, every vertex matched, with the
