@@ -6,4 +6,6 @@ export interface BenchCase {
   iterations?: number;
   /** The target for one run, in milliseconds, when it states one. */
   targetMs?: number;
+  /** Items one run handles; times are reported per item (e.g. per graph). */
+  perRun?: number;
 }

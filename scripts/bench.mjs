@@ -34,7 +34,7 @@ for (const file of caseFiles) {
       samples.push(performance.now() - s);
       runs++;
     }
-    const ms = median(samples);
+    const ms = median(samples) / (c.perRun ?? 1);
     results[c.name] = ms;
     const base = baseline[c.name];
     const ratio = base ? `${(ms / base).toFixed(2)}× baseline` : 'no baseline';
