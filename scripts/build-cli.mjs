@@ -2,7 +2,7 @@
 import { build } from 'esbuild';
 
 await build({
-  entryPoints: { coppice: 'src/cli/main.ts' },
+  entryPoints: { coppice: 'src/cli/main.ts', 'period-worker': 'src/cli/period-worker.ts' },
   outdir: 'dist/cli',
   outExtension: { '.js': '.mjs' },
   bundle: true,
