@@ -40,5 +40,16 @@ export function edgePermutationFactor(g: Graph): bigint {
  *     symmetryFactor(parseNotation('1-2 1-2 1-2 / 1 2'))   // 6n, the two-loop sunset
  */
 export function symmetryFactor(g: Graph, opts: SearchOptions = {}): bigint {
-  return automorphismGroup(g, { ...opts, legs: 'labelled' }).order * edgePermutationFactor(g);
+  // Vertices with neither lines nor legs carry no half-edges: exchanging them is a vertex
+  // automorphism but no half-edge permutation, so their k! is divided out again.
+  const used = new Set<number>([...g.edges.flatMap((e) => [e.a, e.b]), ...g.legs.map((l) => l.vertex)]);
+  const isolated = new Map<string, number>();
+  g.vertices.forEach((v, i) => {
+    if (used.has(i)) return;
+    const key = v.counterterm ? `${v.counterterm.residue.join(',')};${v.counterterm.structure}` : '';
+    isolated.set(key, (isolated.get(key) ?? 0) + 1);
+  });
+  let exchanges = 1n;
+  for (const k of isolated.values()) exchanges *= factorial(k);
+  return (automorphismGroup(g, { ...opts, legs: 'labelled' }).order * edgePermutationFactor(g)) / exchanges;
 }
