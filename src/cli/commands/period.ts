@@ -103,7 +103,7 @@ export const periodCommand: Command = {
 };
 
 function refusalHint(e: PeriodGraphError): string {
-  const tools = 'list its divergent subgraphs with `coppice inspect --theory <t> --graph <g>`, and get its counterterm from the counterterm tools (forest formula)';
+  const tools = 'list its divergent subgraphs with `coppice inspect --theory <t> --graph <g>`, and get its counterterm (forest formula) with `coppice counterterm --symbolic --theory <t> --graph <g>`';
   switch (e.reason) {
     case 'not-primitive':
       return `a period exists only for primitive graphs; ${tools}`;
