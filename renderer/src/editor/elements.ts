@@ -26,11 +26,13 @@ export function controlPoints(style: LineStyle, bow: number, length: number): { 
   if (style !== 'wavy' && style !== 'curly') return { distances: [bow], weights: [0.5] };
   const period = style === 'wavy' ? 9 : 6;
   const amp = style === 'wavy' ? 6 : 8;
-  const n = Math.max(4, Math.round(length / period));
+  // Keep the wave clear of the end nodes, or Cytoscape cannot find the line's endpoints.
+  const margin = Math.min(0.3, 12 / Math.max(length, 1));
+  const n = Math.max(4, Math.round((length * (1 - 2 * margin)) / period));
   const distances: number[] = [];
   const weights: number[] = [];
   for (let i = 0; i < n; i++) {
-    const w = (i + 0.5) / n;
+    const w = margin + ((i + 0.5) / n) * (1 - 2 * margin);
     weights.push(Number(w.toFixed(4)));
     distances.push(Number((2 * bow * w * (1 - w) + (i % 2 ? -amp : amp)).toFixed(2)));
   }

@@ -19,6 +19,7 @@ export interface Platform {
   setDirty(dirty: boolean): void;
   onMenuCommand(listener: (cmd: MenuCommand) => void): () => void;
   onOpenLink(listener: (link: GraphLink) => void): () => void;
+  onOpenFile(listener: (file: OpenedFile) => void): () => void;
 }
 
 export const RECOVERY_KEY = 'coppice.recovery';
@@ -38,6 +39,7 @@ export function desktopPlatform(bridge: CoppiceBridge): Platform {
     setDirty: (d) => bridge.setDirty(d),
     onMenuCommand: (l) => bridge.onMenuCommand(l),
     onOpenLink: (l) => bridge.onOpenLink(l),
+    onOpenFile: (l) => bridge.onOpenFile(l),
   };
 }
 
@@ -123,6 +125,7 @@ export function browserPlatform(storage: Storage | undefined = globalThis.localS
     setDirty() {},
     onMenuCommand: () => () => {},
     onOpenLink: () => () => {},
+    onOpenFile: () => () => {},
   };
 }
 

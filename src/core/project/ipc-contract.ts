@@ -65,6 +65,8 @@ export interface CoppiceBridge {
   setDirty(dirty: boolean): void;
   onMenuCommand(listener: (cmd: MenuCommand) => void): () => void;
   onOpenLink(listener: (link: GraphLink) => void): () => void;
+  /** A project the user picked from the native menu's recent list. */
+  onOpenFile(listener: (file: OpenedFile) => void): () => void;
 }
 
 /** Channel names, in one place. Invoke channels answer; send channels do not. */
@@ -81,6 +83,7 @@ export const IPC = {
   setDirty: 'coppice:set-dirty',
   menuCommand: 'coppice:menu-command',
   openLink: 'coppice:open-link',
+  openFile: 'coppice:open-file',
 } as const;
 
 export const MENU_COMMANDS: readonly MenuCommand[] = [
