@@ -1,4 +1,6 @@
 import type { Command } from './command.ts';
+import './canon-hooks.ts';
+import { isoCommand } from './commands/iso.ts';
 import { inspectCommand } from './commands/inspect.ts';
 import { expandCommand } from './commands/expand.ts';
 import { periodCommand } from './commands/period.ts';
@@ -6,4 +8,4 @@ import { coproductCommand } from './commands/coproduct.ts';
 import { countertermCommand } from './commands/counterterm.ts';
 
 /** Every `coppice` verb. Add a command by writing `commands/<verb>.ts` and listing it here. */
-export const commands: readonly Command[] = [inspectCommand, expandCommand, periodCommand, coproductCommand, countertermCommand];
+export const commands: readonly Command[] = [inspectCommand, expandCommand, periodCommand, coproductCommand, countertermCommand, isoCommand];

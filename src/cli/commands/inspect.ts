@@ -1,3 +1,4 @@
+import { toNickel } from '../../core/canon/nickel-index.ts';
 import { printNotation } from '../../core/graph/notation-print.ts';
 import { graphReportToJSON, inspectGraph, type GraphReport } from '../../core/inspect/graph-report.ts';
 import { bindGraph, type BoundGraph } from '../../core/theory/bind-graph.ts';
@@ -12,6 +13,7 @@ Power counting, divergent subgraphs, overlaps and forest counts of one graph.
   --theory    built-in theory (phi4, phi4-on, phi3, yukawa, qed) or a theory file
   --graph     the graph in compact notation, e.g. "1-2 1-2 / 1 1 2 2"; @file reads it from a file
   --json      machine-readable output (stable shape)
+  --nickel    also give the graph's Nickel index (φ⁴-type graphs: one self-conjugate field)
   --max-vertex-subsets, --max-forest-search-steps   raise the work limits
 `;
 
@@ -19,7 +21,7 @@ export const inspectCommand: Command = {
   name: 'inspect',
   summary: 'power counting, divergent subgraphs and forests of a graph',
   usage,
-  flags: { booleans: ['json'], values: ['theory', 'graph', 'max-vertex-subsets', 'max-forest-search-steps'] },
+  flags: { booleans: ['json', 'nickel'], values: ['theory', 'graph', 'max-vertex-subsets', 'max-forest-search-steps'] },
   run(args, io) {
     const theory = resolveTheory(flag(args, 'theory'), io);
     const graph = readGraph(flag(args, 'graph'), io);
@@ -32,9 +34,10 @@ export const inspectCommand: Command = {
     if (hasFlag(args, 'json')) {
       const json = graphReportToJSON(report);
       for (const extra of inspectExtensions) Object.assign(json, extra(bg, report));
+      if (hasFlag(args, 'nickel')) Object.assign(json, { nickel: toNickel(bg.graph).index });
       io.out(JSON.stringify(json) + '\n');
     } else {
-      io.out(humanReport(bg, report));
+      io.out(humanReport(bg, report) + (hasFlag(args, 'nickel') ? `nickel    ${toNickel(bg.graph).index}\n` : ''));
     }
     return EXIT.ok;
   },
