@@ -39,7 +39,7 @@ export function preparePeriod(g: PeriodGraph, opts: { limits?: Partial<PeriodLim
 export function checkSampleRequest(samples: number, seed: number, limits: Partial<PeriodLimits> = {}): void {
   const max = limits.maxSamples ?? defaultPeriodLimits.maxSamples;
   if (!Number.isSafeInteger(samples) || samples < 1) throw new InputError(`the number of samples must be a positive integer, got ${samples}`);
-  if (samples > max) throw new LimitError('Monte Carlo samples', 'maxSamples', max, samples, `raise it with --max-samples ${samples} if you really mean it (about 1 µs–10 µs per sample per core)`);
+  if (samples > max) throw new LimitError('Monte Carlo samples', 'maxSamples', max, samples, `raise it with --max-samples ${samples} if you mean it (each sample costs about 1–10 µs per core)`);
   if (!Number.isSafeInteger(seed) || seed < 0) throw new InputError(`the seed must be a non-negative integer below 2^53, got ${seed}`);
 }
 

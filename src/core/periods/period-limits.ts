@@ -15,7 +15,7 @@ export interface PeriodLimits {
 export const defaultPeriodLimits: PeriodLimits = {
   maxSamples: 1e10,
   maxEdges: 22,
-  maxExactHeppEdges: 18,
+  maxExactHeppEdges: 20,
 };
 
 /** Hard ceiling: edge subsets are 32-bit masks. */
