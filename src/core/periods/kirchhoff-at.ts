@@ -34,6 +34,7 @@ export function kirchhoffAt(g: PeriodGraph, alpha: readonly number[]): Kirchhoff
   };
   const isTree = new Uint8Array(N);
   let logTropical = 0;
+  let tropical = 1;
   for (const e of order) {
     const ra = find(g.ends[2 * e]!);
     const rb = find(g.ends[2 * e + 1]!);
@@ -42,6 +43,7 @@ export function kirchhoffAt(g: PeriodGraph, alpha: readonly number[]): Kirchhoff
       isTree[e] = 1;
     } else {
       logTropical += Math.log(alpha[e]!);
+      tropical *= alpha[e]!;
     }
   }
   // √α relative to the largest, so nothing overflows.
@@ -49,5 +51,5 @@ export function kirchhoffAt(g: PeriodGraph, alpha: readonly number[]): Kirchhoff
   const sqrtAlpha = Float64Array.from(alpha, (a) => Math.exp(0.5 * (Math.log(a) - logMax)));
   const ratio = new SectorDeterminant(g).ratio(isTree, sqrtAlpha);
   const log = logTropical + Math.log(ratio);
-  return { value: Math.exp(log), log, logTropical, ratio };
+  return { value: tropical * ratio, log, logTropical, ratio };
 }
