@@ -44,8 +44,9 @@ export function deleteElements(g: DocGraph, ids: Iterable<string>): DocGraph {
   const alive = new Set(vertices.map((v) => v.id));
   const edges = g.edges.filter((e) => !gone.has(e.id) && alive.has(e.source) && alive.has(e.target));
   const legs = g.legs.filter((l) => !gone.has(l.id) && alive.has(l.vertex));
+  const keep = <T>(before: readonly T[], after: readonly T[]) => (after.length === before.length ? before : after);
   if (vertices.length === g.vertices.length && edges.length === g.edges.length && legs.length === g.legs.length) return g;
-  return { ...g, vertices, edges, legs };
+  return { ...g, vertices: keep(g.vertices, vertices), edges: keep(g.edges, edges), legs: keep(g.legs, legs) };
 }
 
 export function moveVertices(g: DocGraph, moves: ReadonlyMap<string, Point>): DocGraph {
