@@ -34,15 +34,21 @@ describe('coppice period (built binary, worker threads)', () => {
     expect(j.counterterm['-1'].error).toBeCloseTo(j.error / 3, 12);
   });
 
-  it('Ctrl-C interrupts a long run with exit 130', async () => {
-    const child = spawn('node', ['bin/coppice.mjs', 'period', '--theory', 'phi4', '--graph', WHEEL3, '--samples', '1e9', '--quiet']);
+  it('long runs report progress on stderr, and Ctrl-C interrupts them with exit 130', async () => {
+    const child = spawn('node', ['bin/coppice.mjs', 'period', '--theory', 'phi4', '--graph', WHEEL3, '--samples', '1e9', '--json']);
     let err = '';
-    child.stderr.on('data', (d) => (err += d));
-    await new Promise((r) => setTimeout(r, 700));
+    let out = '';
+    child.stdout.on('data', (d) => (out += d));
+    // The first progress line (after ~2 s) shows the run is under way with its handlers installed.
+    await new Promise<void>((r) => child.stderr.on('data', (d) => {
+      err += d;
+      if (/period: \d+%/.test(err)) r();
+    }));
     child.kill('SIGINT');
     const code = await new Promise<number | null>((r) => child.on('exit', r));
     expect(code).toBe(130);
     expect(err).toMatch(/interrupted/);
+    expect(out).toBe(''); // progress never goes to the JSON on stdout
   });
 });
 
