@@ -6,7 +6,18 @@ import { parseNotation } from '../../../src/core/graph/notation-parse.ts';
 import type { Edge, Graph, Leg } from '../../../src/core/graph/types.ts';
 import { bindGraph } from '../../../src/core/theory/bind-graph.ts';
 import { builtinTheory } from '../../../src/core/theory/builtin/index.ts';
-import { circulant, completeBipartite, random4Regular, randomPermutation, randomTheoryGraph, relabel, rng, type TheoryName } from './random-graphs.ts';
+import {
+  circulant,
+  completeBipartite,
+  random4Regular,
+  randomPermutation,
+  randomTheoryGraph,
+  relabel,
+  rng,
+  rookGraph4x4,
+  shrikhandeGraph,
+  type TheoryName,
+} from './random-graphs.ts';
 
 const theories: TheoryName[] = ['phi4', 'phi4-on', 'phi3', 'yukawa', 'qed'];
 const bound = (t: TheoryName, g: Graph) => bindGraph(g, builtinTheory(t)).graph;
@@ -48,6 +59,15 @@ describe('canonical notation', () => {
     expect(canonicalNotation(circulant(8, [1, 2]))).not.toBe(canonicalNotation(completeBipartite(4, 4)));
     const prism = parseNotation('1-2 2-3 3-1 4-5 5-6 6-4 1-4 2-5 3-6 /');
     expect(canonicalNotation(prism)).not.toBe(canonicalNotation(completeBipartite(3, 3)));
+  });
+  it('the Shrikhande graph and the 4×4 rook graph (both srg(16,6,2,2), equal under colour refinement) differ; each is invariant', () => {
+    const rand = rng(12);
+    const s = shrikhandeGraph();
+    const r = rookGraph4x4();
+    expect(canonicalNotation(s)).not.toBe(canonicalNotation(r));
+    for (const g of [s, r]) expect(canonicalNotation(relabel(g, Array.from({ length: 16 }, (_, i) => (i * 5 + 3) % 16), rand))).toBe(canonicalNotation(g));
+    expect(canonicalForm(s).automorphismGroupOrder).toBe(192n);
+    expect(canonicalForm(r).automorphismGroupOrder).toBe(1152n);
   });
 });
 

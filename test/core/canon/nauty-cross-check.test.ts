@@ -14,11 +14,14 @@ import {
   completeBipartite,
   completedZigzag,
   decomplete,
+  hypercube,
   random4Regular,
   randomPermutation,
   randomTheoryGraph,
   relabel,
   rng,
+  rookGraph4x4,
+  shrikhandeGraph,
   type TheoryName,
 } from './random-graphs.ts';
 
@@ -64,6 +67,8 @@ function symmetricBatch(): { name: string; graph: Graph }[] {
   out.push({ name: 'K_4,4 with doubled lines', graph: completeBipartite(4, 4, 2) });
   out.push({ name: 'K_3,5 with tripled lines', graph: completeBipartite(3, 5, 3) });
   out.push({ name: 'K_8,8', graph: completeBipartite(8, 8) });
+  out.push({ name: 'Shrikhande graph', graph: shrikhandeGraph() }, { name: '4×4 rook graph', graph: rookGraph4x4() });
+  for (let k = 2; k <= 5; k++) out.push({ name: `hypercube Q${k}`, graph: hypercube(k) });
   return out;
 }
 
@@ -115,6 +120,8 @@ describe.skipIf(!available)('nauty cross-check', () => {
       }
     }
     graphs.push(circulant(8, [1, 2]), circulant(8, [1, 3]), completeBipartite(4, 4), circulant(10, [1, 2]), circulant(10, [1, 3]), circulant(10, [2, 3]));
+    // Strongly regular look-alikes (16, 6, 2, 2), each also in a random numbering.
+    for (const g of [shrikhandeGraph(), rookGraph4x4()]) graphs.push(g, relabel(g, randomPermutation(rand, 16), rand));
     const encoded = graphs.map((g) => encodeForNauty(g));
     // Colours go with the canonical graph, so look-alikes with different colours stay apart.
     const nauty = nautyCanonicalGraphs(encoded).map((c, i) => `${encoded[i]!.cells.map((x, k) => `${encoded[i]!.cellKeys[k]}×${x.length}`).join(',')}\n${c}`);

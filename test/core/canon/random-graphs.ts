@@ -168,3 +168,35 @@ export function relabel(g: Graph, perm: readonly number[], rand: () => number, k
 export function randomPermutation(rand: () => number, n: number): number[] {
   return shuffle(rand, Array.from({ length: n }, (_, i) => i));
 }
+
+/** A graph on Z4 × Z4 (vertex 4a + b) joining (a,b) and (c,d) when `adjacent(a, b, c, d)`. */
+function onZ4Squared(adjacent: (a: number, b: number, c: number, d: number) => boolean): Graph {
+  const edges: Edge[] = [];
+  for (let x = 0; x < 16; x++) for (let y = x + 1; y < 16; y++) if (adjacent(x >> 2, x & 3, y >> 2, y & 3)) edges.push(line(x, y));
+  return { vertices: named(16), edges, legs: [] };
+}
+
+/**
+ * The Shrikhande graph and the 4 × 4 rook's graph: both strongly regular with parameters
+ * (16, 6, 2, 2) and not isomorphic — a classical pair that colour refinement cannot tell apart
+ * (common practice; |Aut| = 192 and 1152 = 2 · 4!², from memory, checked against nauty in the tests).
+ */
+export function shrikhandeGraph(): Graph {
+  const m = (v: number) => ((v % 4) + 4) % 4;
+  return onZ4Squared((a, b, c, d) => {
+    const da = m(c - a);
+    const db = m(d - b);
+    return (da === 0 && db % 2 === 1) || (db === 0 && da % 2 === 1) || (da === db && da % 2 === 1);
+  });
+}
+
+export function rookGraph4x4(): Graph {
+  return onZ4Squared((a, b, c, d) => (a === c) !== (b === d));
+}
+
+/** The k-dimensional hypercube graph. */
+export function hypercube(k: number): Graph {
+  const edges: Edge[] = [];
+  for (let x = 0; x < 1 << k; x++) for (let i = 0; i < k; i++) if (x < (x ^ (1 << i))) edges.push(line(x, x ^ (1 << i)));
+  return { vertices: named(1 << k), edges, legs: [] };
+}
