@@ -16,8 +16,8 @@ export interface GraphIsomorphism {
  * and composes A's canonical labelling with the inverse of B's. Both graphs should be bound
  * to the same theory (fields resolved) first.
  *
- *     findIsomorphism(parseNotation('1-2 2-3 / 1 3'), parseNotation('b-a c-b / c a'), { legs: 'unlabelled' })
- *     // { vertices: [2, 0, 1] ... }  (names: 1→c, 2→b, 3→a ... ) or another valid map
+ *     findIsomorphism(parseNotation('1-2 1-2 2-3 2-3 / 1 1 3 3'), parseNotation('b-c a-b c-b b-a / a a c c'))
+ *     // { vertices: [2, 0, 1], edges: [1, 3, 0, 2], legs: [0, 1, 2, 3] }: 1→a, 2→b, 3→c (B numbers b, c, a)
  */
 export function findIsomorphism(a: Graph, b: Graph, opts: CanonOptions = {}): GraphIsomorphism | null {
   if (a.vertices.length !== b.vertices.length || a.edges.length !== b.edges.length || a.legs.length !== b.legs.length) return null;
