@@ -21,7 +21,7 @@ describe('canvas elements', () => {
   it('parallel lines bow apart symmetrically, loops turn around the vertex', () => {
     const els = graphElements(graph('1-2 1-2 1-2 3-3 / 1 2'), builtinTheory('phi4'));
     const bows = els.filter((e) => e.data.kind === 'line' && e.data.cpd).map((e) => (e.data.cpd as number[])[0]);
-    expect(bows).toEqual([-34, 0, 34]);
+    expect(bows).toEqual([-56, 0, 56]);
     expect(els.find((e) => String(e.classes).includes('loop'))?.data.loopDirection).toBe('0deg');
   });
 

@@ -10,7 +10,7 @@ import type { DocGraph, Point } from '../../../src/core/project/index.ts';
 /** Suffix of the id of a leg's free end (the leg's line has the leg's own id). */
 export const LEG_END = '~end';
 export const LEG_LENGTH = 64;
-const PARALLEL_GAP = 34;
+const PARALLEL_GAP = 56;
 
 export function lineStyleOf(theory: Theory, field: string | null, oriented: boolean): LineStyle {
   const name = field ?? (oriented && theory.defaultOrientedField ? theory.defaultOrientedField : theory.defaultField);

@@ -261,5 +261,5 @@ export const useDocumentStore = defineStore('document', () => {
 });
 
 function slug(s: string): string {
-  return s.normalize('NFKD').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '').toLowerCase() || 'project';
+  return s.replace(/φ/g, 'phi').replace(/ψ/g, 'psi').normalize('NFKD').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '').toLowerCase() || 'project';
 }
