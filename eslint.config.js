@@ -3,7 +3,7 @@
 import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
-  { ignores: ['node_modules/**', 'dist/**', 'out/**', 'release/**', 'renderer/dist/**', 'coverage/**', '**/*.d.ts'] },
+  { ignores: ['node_modules/**', 'dist/**', 'out/**', 'release/**', 'renderer/dist/**', 'coverage/**', '**/*.d.ts', '.bench-results/**', '.ci-out/**'] },
   ...tseslint.configs.recommended,
   {
     rules: {
