@@ -10,3 +10,4 @@ export * from './inspect/index.ts';
 export * from './periods/index.ts';
 export * from './canon/index.ts';
 export * from './hopf/index.ts';
+export * from './export/index.ts';
