@@ -16,7 +16,7 @@ export default defineConfig({
         test: {
           name: 'core',
           environment: 'node',
-          include: ['test/core/**/*.test.ts', 'test/cli/**/*.test.ts', 'test/reference/**/*.test.ts'],
+          include: ['test/core/**/*.test.ts', 'test/cli/**/*.test.ts', 'test/reference/**/*.test.ts', 'test/reliability/**/*.test.ts'],
           testTimeout: 60_000,
         },
       },
