@@ -48,6 +48,7 @@ export function logSeries(a: Series, cap: number): Series {
   }
   const c = a.coeffs[0]!;
   const logC = logOfConstant(c);
+  if (a.coeffs.length === 1 && a.order === Infinity) return Series.constant(logC);
   const K = Math.max(0, Math.min(a.order, cap));
   const cInv = invertCoefficient(c);
   const b: Poly[] = [];

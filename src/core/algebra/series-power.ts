@@ -42,7 +42,7 @@ export function powInteger(a: Series, k: number, cap: number): Series {
   let base = k < 0 ? inverse(a, cap + (n - 1) * a.val) : a;
   // base^j has leading power j·v; the result needs every factor to relative precision cap − n·v.
   const v = base.val;
-  const rel = cap - n * v;
+  const rel = Math.max(0, cap - n * v);
   const keep = (s: Series, j: number) => s.truncate(j * v + rel);
   let result = Series.ONE;
   let used = 0;

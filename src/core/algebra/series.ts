@@ -115,7 +115,7 @@ export class Series {
    */
   truncate(k: number): Series {
     if (k >= this.order) return this;
-    if (this.order === Infinity && this.top <= k) return this;
+    if (this.order === Infinity && (this.coeffs.length === 0 || this.top <= k)) return this;
     return Series.make(this.val, this.coeffs, k);
   }
 
