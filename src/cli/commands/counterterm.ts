@@ -1,5 +1,4 @@
 import { canonicalNotation } from '../../core/canon/canonical-form.ts';
-import { InputError } from '../../core/errors.ts';
 import { countertermDiagrams } from '../../core/hopf/counterterm-diagrams.ts';
 import { unlabelledLegsClassifier } from '../../core/hopf/default-classifier.ts';
 import { buildFormulaTree, nodeName, unfoldedTermCount, unfoldFormulaTree } from '../../core/hopf/formula-tree.ts';
@@ -10,8 +9,17 @@ import { flag, hasFlag, intFlag } from '../args.ts';
 import { EXIT, type Command } from '../command.ts';
 import { readGraph, resolveTheory } from '../inputs.ts';
 import { latexHooks } from '../latex-hooks.ts';
+import { runValues } from './counterterm-values.ts';
 
-const usage = `coppice counterterm --symbolic --theory <name|file.json> --graph "<notation>" [--json] [--latex]
+const usage = `coppice counterterm --theory <name|file.json> --scheme <ms|msbar|g|mom> --graph "<notation>" [--json] [--latex]
+coppice counterterm --symbolic --theory <name|file.json> --graph "<notation>" [--json] [--latex]
+
+Without --symbolic: the counterterm S_R(Γ) of the graph alone (no coupling, sign, symmetry or
+group factor; for two-point graphs the coefficient of p²) as an exact Laurent series in ε, with
+the renormalized value as a polynomial in ln(p²/μ²) and the checks: finiteness, locality,
+routing independence and (minimal schemes) the renormalization-group pole relations.
+Schemes: ms (d^Dk/π^{D/2} per loop), msbar (× e^{γε} per loop), g (per-loop normalization
+making the one-loop log-divergent propagator integral exactly 1/ε), mom (momentum subtraction).
 
 The counterterm as a formula tree of the twisted antipode,
   S_R(Γ) = −R[ Γ + Σ_γ S_R(γ) Γ/γ ],
@@ -25,11 +33,9 @@ export const countertermCommand: Command = {
   name: 'counterterm',
   summary: 'counterterm of a graph: formula tree and forest terms (--symbolic)',
   usage,
-  flags: { booleans: ['json', 'latex', 'symbolic'], values: ['theory', 'graph', 'max-forest-terms'] },
+  flags: { booleans: ['json', 'latex', 'symbolic'], values: ['theory', 'graph', 'max-forest-terms', 'scheme', 'compare-routings'] },
   run(args, io) {
-    if (!hasFlag(args, 'symbolic')) {
-      throw new InputError('counterterm values need the exact evaluator, which is not available yet', undefined, 'add --symbolic for the formula tree and forest terms');
-    }
+    if (!hasFlag(args, 'symbolic')) return runValues(args, io);
     const theory = resolveTheory(flag(args, 'theory'), io);
     const bg = bindGraph(readGraph(flag(args, 'graph'), io), theory);
     const H = new HopfAlgebra(theory, unlabelledLegsClassifier);

@@ -1,0 +1,80 @@
+import { formatPoly } from '../../core/algebra/format-text.ts';
+import type { Series } from '../../core/algebra/series.ts';
+import { InputError } from '../../core/errors.ts';
+import { CountertermEngine, renormalizedValue } from '../../core/renorm/counterterm-engine.ts';
+import { checkRgPoles } from '../../core/renorm/rg-pole-check.ts';
+import { parseScheme } from '../../core/schemes/scheme.ts';
+import { bindGraph } from '../../core/theory/bind-graph.ts';
+import { flag, hasFlag, intFlag, type ParsedArgs } from '../args.ts';
+import { EXIT, type CliIO } from '../command.ts';
+import { readGraph, resolveTheory } from '../inputs.ts';
+import { momCounterterm } from '../../core/renorm/mom-engine.ts';
+
+/** `{"-2": "...", "-1": "..."}`: every power from the leading one through `top`, zeros as "0". */
+export function seriesJSON(s: Series, top: number): Record<string, string> {
+  const out: Record<string, string> = {};
+  const low = s.coeffs.length ? Math.min(s.val, top) : top;
+  for (let p = low; p <= top; p++) out[String(p)] = p <= s.order ? formatPoly(s.coeff(p)) : '?';
+  return out;
+}
+
+export function runValues(args: ParsedArgs, io: CliIO): number {
+  const theory = resolveTheory(flag(args, 'theory'), io);
+  const scheme = parseScheme(flag(args, 'scheme') ?? 'msbar');
+  const bg = bindGraph(readGraph(flag(args, 'graph'), io), theory);
+  if (hasFlag(args, 'latex')) throw new InputError('LaTeX output of counterterm values is not available yet', undefined, 'use --json, or --symbolic --latex for the formula');
+  const scalar = theory.fields.every((f) => f.statistics === 'boson' && f.propagatorWeight === 2 && !f.antiparticle);
+  const names = (r: { u: number; v: number } | null) => (r ? [bg.graph.vertices[r.u]!.name, bg.graph.vertices[r.v]!.name] : null);
+  let report: Record<string, unknown>;
+  let failed = false;
+  if (!scalar) {
+    report = { scheme: scheme.name, evaluable: false, reason: `theory ${theory.name} has fermion or gauge lines: exact values are available for the scalar theories (phi4, phi4-on, phi3) only; supply values by hand` };
+  } else if (!scheme.minimal) {
+    const r = momCounterterm(theory, bg, { cancel: io.cancel });
+    if (!r.ok) report = { scheme: scheme.name, evaluable: false, reason: r.reason };
+    else {
+      failed = !r.finite;
+      report = {
+        scheme: scheme.name, evaluable: true, method: r.method, routing: names(r.routing), routingsCompared: 1,
+        counterterm: seriesJSON(r.value, 0), finite: r.finite, local: true, routingsAgree: true,
+        renormalized: Object.fromEntries(r.renormalized.map((c, j) => [String(j), formatPoly(c)])),
+        expCheck: r.expCheck,
+      };
+    }
+  } else {
+    const engine = new CountertermEngine(theory, scheme, { cancel: io.cancel, compareRoutings: intFlag(args, 'compare-routings', 2) });
+    const ct = engine.counterterm(bg);
+    if (!ct.ok) report = { scheme: scheme.name, evaluable: false, reason: ct.reason };
+    else {
+      // The representative of the class may number vertices differently; report routing on the input graph when it is the representative.
+      const rep = engine.algebra.representative(engine.algebra.classOf(bg));
+      const a = engine.algebra.analyze(rep);
+      const ren = renormalizedValue(ct.detail.subtracted, ct.value, bg.graph.edges.length);
+      const rg = checkRgPoles(engine, a, ct.value);
+      const routing = ct.detail.routing ? [rep.graph.vertices[ct.detail.routing.u]!.name, rep.graph.vertices[ct.detail.routing.v]!.name] : null;
+      failed = !ren.finite || !ct.detail.local || !ct.detail.routingsAgree || (rg.checked && !rg.consistent);
+      report = {
+        scheme: scheme.name, evaluable: true, method: ct.detail.method, routing, routingsCompared: ct.detail.routingsCompared,
+        counterterm: seriesJSON(ct.value, -1), finite: ren.finite, local: ct.detail.local, routingsAgree: ct.detail.routingsAgree,
+        renormalized: Object.fromEntries(ren.coefficients.map((c, j) => [String(j), formatPoly(c)])),
+        rgConsistent: rg.checked ? rg.consistent : null,
+      };
+    }
+  }
+  if (hasFlag(args, 'json')) io.out(JSON.stringify(report) + '\n');
+  else io.out(humanValues(report, theory.name) + '\n');
+  return failed ? EXIT.checkFailed : EXIT.ok;
+}
+
+function humanValues(r: Record<string, unknown>, theory: string): string {
+  if (!r.evaluable) return `not evaluable exactly [theory ${theory}, scheme ${r.scheme}]: ${r.reason}`;
+  const series = (m: Record<string, string>, v: string) =>
+    Object.entries(m).filter(([, c]) => c !== '0').map(([p, c]) => `(${c})${p === '0' ? '' : ` ${v}^${p}`}`).join(' + ') || '0';
+  const mark = (b: unknown) => (b === true ? 'pass' : b === false ? 'FAIL' : 'not checked');
+  return [
+    `counterterm S_R  = ${series(r.counterterm as Record<string, string>, 'eps')}    [theory ${theory}, scheme ${r.scheme}]`,
+    `renormalized     = ${series(r.renormalized as Record<string, string>, 'L')}    (L = ln(p²/μ²), at ε = 0${r.routing ? `, momentum routed ${(r.routing as string[]).join('→')}` : ''})`,
+    `method           ${r.method}`,
+    `checks           finite: ${mark(r.finite)}   local: ${mark(r.local)}   routings agree: ${mark(r.routingsAgree)} (${r.routingsCompared} compared)   RG poles: ${mark(r.rgConsistent)}`,
+  ].join('\n');
+}

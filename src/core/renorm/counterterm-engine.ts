@@ -1,0 +1,180 @@
+import { Poly } from '../algebra/polynomial.ts';
+import { polePart } from '../algebra/pole-part.ts';
+import { Series } from '../algebra/series.ts';
+import { contractParts } from '../graph/contract.ts';
+import { subgraphAsGraph } from '../graph/extract-subgraph.ts';
+import { bindGraph, type BoundGraph } from '../theory/bind-graph.ts';
+import type { Theory } from '../theory/types.ts';
+import { unlabelledLegsClassifier } from '../hopf/default-classifier.ts';
+import { countertermMarks } from '../hopf/counterterm-structure.ts';
+import { HopfAlgebra, type GraphAnalysis } from '../hopf/hopf-algebra.ts';
+import { IntegralEvaluator, NotEvaluable } from '../integrals/evaluate-integral.ts';
+import { loopsOf, type PropIntegral } from '../integrals/prop-integral.ts';
+import type { Scheme } from '../schemes/scheme.ts';
+import { neverCancel, type CancelToken } from '../util/cancel.ts';
+import { infraredDivergence } from './infrared-safety.ts';
+import { atReferencePoint, isLocal, logCoefficient, type ScalingTerm } from './momentum-series.ts';
+import { routedIntegral } from './routed-integral.ts';
+import { choosePairs, type Routing } from './routings.ts';
+
+/** The counterterm of one graph class, or why it has none that can be computed. */
+export type CountertermValue =
+  | { readonly ok: true; readonly value: Series; readonly detail: EvaluationDetail }
+  | { readonly ok: false; readonly reason: string };
+
+export interface EvaluationDetail {
+  /** Routing used (vertex indices of the representative), or null when the graph needs none. */
+  readonly routing: Routing | null;
+  readonly routingsCompared: number;
+  readonly routingsAgree: boolean;
+  readonly method: string;
+  /** R̄Γ term by term with its momentum scaling (p²)^{−lε}. */
+  readonly subtracted: readonly ScalingTerm[];
+  readonly local: boolean;
+}
+
+export interface EngineOptions {
+  readonly cancel?: CancelToken;
+  /** How many safe, evaluable routings to compare (the first gives the value). */
+  readonly compareRoutings?: number;
+}
+
+/**
+ * Counterterms S_R(Γ) = −R[R̄Γ] of massless scalar graphs, R̄Γ = φ(Γ) + Σ_α Π S_R(α_i) φ(Γ/α),
+ * with φ evaluated exactly on a routing of the external momentum (DESIGN §5): infrared
+ * rearrangement for logarithmically divergent graphs (momentum in at one vertex, out at another;
+ * the MS counterterm does not depend on where), the true kinematics with p² = 1 for quadratically
+ * divergent two-point graphs (the coefficient of p²). Every routing is checked for infrared safety
+ * on the graph and on every cograph it uses. Results are memoized per isomorphism class.
+ */
+export class CountertermEngine {
+  readonly algebra: HopfAlgebra;
+  readonly evaluator: IntegralEvaluator;
+  private readonly memo = new Map<string, CountertermValue>();
+  private readonly cancel: CancelToken;
+
+  constructor(
+    readonly theory: Theory,
+    readonly scheme: Scheme,
+    private readonly opts: EngineOptions = {},
+  ) {
+    this.algebra = new HopfAlgebra(theory, unlabelledLegsClassifier);
+    this.cancel = opts.cancel ?? neverCancel;
+    this.evaluator = new IntegralEvaluator({ D0: theory.dimension, loopFactor: (k) => scheme.loopFactor(theory.dimension, k), cancel: this.cancel });
+    if (!scheme.minimal) throw new Error('CountertermEngine handles the minimal schemes; use the momentum-subtraction engine for mom');
+  }
+
+  /** S_R of a graph (by class). */
+  counterterm(g: BoundGraph): CountertermValue {
+    const key = this.algebra.classOf(g);
+    const hit = this.memo.get(key);
+    if (hit) return hit;
+    const result = this.compute(this.algebra.analyze(this.algebra.representative(key)));
+    this.memo.set(key, result);
+    return result;
+  }
+
+  private compute(a: GraphAnalysis): CountertermValue {
+    this.cancel.throwIfCancelled();
+    const bg = a.bound;
+    if (!a.divergent) return { ok: true, value: Series.ZERO, detail: { routing: null, routingsCompared: 0, routingsAgree: true, method: 'superficially convergent: no counterterm', subtracted: [], local: true } };
+    const pairs = choosePairs(a);
+    if (!pairs.ok) return { ok: false, reason: pairs.reason };
+    if (pairs.pairs.length === 0) {
+      // Two-point graph with both legs on one vertex: no momentum flows, p-independent: no p² counterterm.
+      return { ok: true, value: Series.ZERO, detail: { routing: null, routingsCompared: 0, routingsAgree: true, method: 'no momentum flows through the graph (massless tadpole type): the p² counterterm vanishes', subtracted: [], local: true } };
+    }
+    const found: { routing: Routing; value: Series; terms: ScalingTerm[]; local: boolean; method: string }[] = [];
+    const reasons: string[] = [];
+    const want = Math.max(1, this.opts.compareRoutings ?? 2);
+    for (const r of pairs.pairs) {
+      if (found.length >= want) break;
+      const tried = this.subtractedOnRouting(a, r);
+      if (!tried.ok) {
+        reasons.push(tried.reason);
+        continue;
+      }
+      const K = polePart(atReferencePoint(tried.terms));
+      found.push({ routing: r, value: K.neg(), terms: tried.terms, local: isLocal(tried.terms, a.bound.graph.edges.length), method: tried.method });
+    }
+    if (found.length === 0) {
+      return { ok: false, reason: `no routing of the external momentum is both infrared safe and evaluable; ${summarize(reasons)}` };
+    }
+    const first = found[0]!;
+    const agree = found.every((f) => seriesEqual(f.value, first.value));
+    return {
+      ok: true,
+      value: first.value,
+      detail: { routing: first.routing, routingsCompared: found.length, routingsAgree: agree, method: first.method, subtracted: first.terms, local: first.local },
+    };
+  }
+
+  /** R̄Γ on one routing, term by term, or why the routing fails. */
+  subtractedOnRouting(a: GraphAnalysis, r: Routing): { ok: true; terms: ScalingTerm[]; method: string } | { ok: false; reason: string } {
+    const bg = a.bound;
+    const where = `routing ${bg.graph.vertices[r.u]!.name}→${bg.graph.vertices[r.v]!.name}`;
+    const main = routedIntegral(bg, r.u, r.v);
+    if (!main.ok) return { ok: false, reason: main.reason };
+    const ir = infraredDivergence(main.integral, this.theory.dimension);
+    if (ir) return { ok: false, reason: `${where}: the graph is infrared divergent when lines ${ir.softLines.map((k) => k + 1).join(',')} go soft` };
+    const pieces: { coefficient: Series; integral: PropIntegral }[] = [{ coefficient: Series.ONE, integral: main.integral }];
+    for (const adm of a.admissible) {
+      const comps = adm.components.map((i) => a.subgraphs[i]!);
+      let coefficient = Series.ONE;
+      for (const c of comps) {
+        const sub = bindGraph(subgraphAsGraph(bg.graph, c.edgeList).graph, this.theory);
+        const ct = this.counterterm(sub);
+        if (!ct.ok) return { ok: false, reason: `the counterterm of a subgraph is not available (${ct.reason})` };
+        coefficient = coefficient.mul(ct.value);
+      }
+      if (coefficient.isZero()) continue;
+      const parts = comps.map((c) => ({ edges: c.edgeList, mark: countertermMarks(this.theory, c.residue, c.omega)[0]! }));
+      const { graph: q, vertexMap } = contractParts(bg.graph, parts);
+      const routedQ = routedIntegral(bindGraph(q, this.theory), vertexMap[r.u]!, vertexMap[r.v]!);
+      if (!routedQ.ok) return { ok: false, reason: `${where}: ${routedQ.reason}` };
+      const irQ = infraredDivergence(routedQ.integral, this.theory.dimension);
+      if (irQ) return { ok: false, reason: `${where}: the cograph after contracting lines ${comps.map((c) => c.edgeList.map((e) => e + 1).join(',')).join(' | ')} is infrared divergent` };
+      pieces.push({ coefficient, integral: routedQ.integral });
+    }
+    const terms: ScalingTerm[] = [];
+    const before = { ...this.evaluator.log };
+    try {
+      for (const p of pieces) {
+        // φ(Γ/α) through ε^{−val(coefficient)} so that the product is known through ε⁰.
+        const need = p.coefficient.isZero() ? 0 : -p.coefficient.val;
+        const v = this.evaluator.evaluate(p.integral, need);
+        terms.push({ loops: loopsOf(p.integral), value: p.coefficient.mul(v) });
+      }
+    } catch (e) {
+      if (e instanceof NotEvaluable) return { ok: false, reason: `${where}: ${e.message}` };
+      throw e;
+    }
+    const log = this.evaluator.log;
+    const steps = `${log.bubbles - before.bubbles} bubble(s), ${log.triangles - before.triangles} triangle rule(s), ${log.factorizations - before.factorizations} factorization(s)`;
+    return { ok: true, terms, method: `${where}; ${pieces.length} term(s) of R̄; ${steps} (new integrals only)` };
+  }
+}
+
+function seriesEqual(x: Series, y: Series): boolean {
+  const d = x.sub(y);
+  return d.coeffs.every((c) => c.isZero());
+}
+
+function summarize(reasons: string[]): string {
+  const uniq = [...new Set(reasons)];
+  return uniq.slice(0, 3).join('; ') + (uniq.length > 3 ? `; and ${uniq.length - 3} more` : '');
+}
+
+/** The renormalized value φ_R = R̄Γ + S_R(Γ) as a polynomial in L = ln(p²/μ²) at ε⁰, and whether it is finite. */
+export function renormalizedValue(terms: readonly ScalingTerm[], counterterm: Series, maxJ: number): { finite: boolean; coefficients: Poly[] } {
+  const out: Poly[] = [];
+  let finite = true;
+  for (let j = 0; j <= maxJ; j++) {
+    let c = logCoefficient(terms, j);
+    if (j === 0) c = c.add(counterterm);
+    if (!polePart(c).isZero()) finite = false;
+    out.push(c.order >= 0 ? c.coeff(0) : Poly.ZERO);
+  }
+  while (out.length > 1 && out[out.length - 1]!.isZero()) out.pop();
+  return { finite, coefficients: out };
+}
