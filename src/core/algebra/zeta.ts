@@ -39,16 +39,16 @@ export function zetaPoly(k: number): Poly {
 /**
  * ζ(k) as a double by direct summation of the first M−1 terms with the Euler–Maclaurin tail
  * ∫_M^∞ x^{−k}dx + M^{−k}/2 + Σ_j B_{2j}/(2j)! · k(k+1)…(k+2j−2) M^{−k−2j+1}
- * (DLMF 2.10.1); M = 12 and four correction terms give full double precision for k ≥ 2.
+ * (DLMF 2.10.1); M = 30 and six correction terms give full double precision for k ≥ 2.
  */
 export function zetaNumeric(k: number): number {
   if (!Number.isInteger(k) || k < 2) throw new RangeError(`zeta(k) needs an integer k ≥ 2, got ${k}`);
-  const M = 12;
+  const M = 30;
   let s = 0;
   for (let n = M - 1; n >= 1; n--) s += n ** -k;
   let tail = M ** (1 - k) / (k - 1) + M ** -k / 2;
   let rising = k; // k(k+1)…(k+2j−2)
-  for (let j = 1; j <= 4; j++) {
+  for (let j = 1; j <= 6; j++) {
     const b = bernoulli(2 * j).toNumber() / Number(factorial(2 * j));
     tail += b * rising * M ** (-k - 2 * j + 1);
     rising *= (k + 2 * j - 1) * (k + 2 * j);
