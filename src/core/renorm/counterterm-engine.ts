@@ -76,7 +76,6 @@ export class CountertermEngine {
 
   private compute(a: GraphAnalysis): CountertermValue {
     this.cancel.throwIfCancelled();
-    const bg = a.bound;
     if (!a.divergent) return { ok: true, value: Series.ZERO, detail: { routing: null, routingsCompared: 0, routingsAgree: true, method: 'superficially convergent: no counterterm', subtracted: [], local: true } };
     const pairs = choosePairs(a);
     if (!pairs.ok) return { ok: false, reason: pairs.reason };

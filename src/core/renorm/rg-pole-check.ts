@@ -20,19 +20,21 @@ const coeff = (s: Series, p: number): Poly => (p > s.order ? Poly.ZERO : s.coeff
 
 /**
  * In a minimal scheme the higher poles follow from the simple ones: writing S_R = Σ_k c_k ε^{−k}
- * and grading by loop number (Y Γ = L(Γ) Γ), the counterterm satisfies Y(c_{k+1}) = c_k ⋆ Y(c_1),
- *   L(Γ) c_{k+1}(Γ) = Σ_α c_k(α) · L(Γ/α) c_1(Γ/α),
- * the sum over proper admissible α (c_k of a product from the product of the components'
- * counterterms) — the scattering-type formula of "Renormalization in quantum field theory and the
- * Riemann–Hilbert problem II", Commun. Math. Phys. 216 (2001) 215, arXiv:hep-th/0003188, i.e. the
- * RG pole equations graph by graph. Needs the counterterms of the cographs, which the engine computes.
+ * and grading by loop number (Y Γ = L(Γ) Γ), the counterterm satisfies Y(c_{k+1}) = Y(c_1) ⋆ c_k,
+ *   L(Γ) c_{k+1}(Γ) = Σ_α L(α) c_1(α) · c_k(Γ/α),
+ * the sum over proper admissible α (c_1 of a product from the product of the components'
+ * counterterms). Derivation: locality makes ε·(S_R ⋆ Yφ) finite; Y is a derivation, so
+ * S_R ⋆ Yφ = Yφ_R − (Y S_R ⋆ S_R^{⋆−1}) ⋆ φ_R, forcing Y S_R ⋆ S_R^{⋆−1} = b/ε with b = Y c_1 —
+ * the pole equations of "Renormalization in quantum field theory and the Riemann–Hilbert problem II",
+ * Commun. Math. Phys. 216 (2001) 215, arXiv:hep-th/0003188 (β as the residue), graph by graph.
+ * Needs the counterterms of the cographs, which the engine computes.
  */
 export function checkRgPoles(engine: CountertermEngine, a: GraphAnalysis, value: Series): RgCheck {
   const bg = a.bound;
   const L = loopNumber(bg.graph);
   const maxPole = value.coeffs.length ? -value.val : 0;
   if (maxPole <= 1) return { checked: true, consistent: true };
-  const pieces: { cSub: Series; loopsQ: number; c1Q: Poly }[] = [];
+  const pieces: { cSub: Series; loopsSub: number; ctQ: Series }[] = [];
   for (const adm of a.admissible) {
     const comps = adm.components.map((i) => a.subgraphs[i]!);
     let cSub: Series | null = null;
@@ -45,12 +47,12 @@ export function checkRgPoles(engine: CountertermEngine, a: GraphAnalysis, value:
     const qb = bindGraph(q, engine.theory);
     const ctQ = engine.counterterm(qb);
     if (!ctQ.ok) return { checked: false, consistent: false, reason: `cograph counterterm not available: ${ctQ.reason}` };
-    pieces.push({ cSub: cSub!, loopsQ: loopNumber(q), c1Q: coeff(ctQ.value, -1) });
+    pieces.push({ cSub: cSub!, loopsSub: comps.reduce((x, c) => x + c.loops, 0), ctQ: ctQ.value });
   }
   for (let k = 1; k < maxPole; k++) {
     const lhs = coeff(value, -(k + 1)).scale(Rational.int(L));
     let rhs = Poly.ZERO;
-    for (const p of pieces) rhs = rhs.add(coeff(p.cSub, -k).mul(p.c1Q).scale(Rational.int(p.loopsQ)));
+    for (const p of pieces) rhs = rhs.add(coeff(p.cSub, -1).mul(coeff(p.ctQ, -k)).scale(Rational.int(p.loopsSub)));
     if (!lhs.sub(rhs).isZero()) return { checked: true, consistent: false, reason: `the ε^-${k + 1} pole disagrees with the renormalization group` };
   }
   return { checked: true, consistent: true };
