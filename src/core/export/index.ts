@@ -1,4 +1,5 @@
 export * from './latex-macros.ts';
+export * from './expand-macros.ts';
 export * from './latex-text.ts';
 export * from './latex-document.ts';
 export * from './latex-graphs.ts';

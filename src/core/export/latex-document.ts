@@ -71,7 +71,13 @@ export interface LatexOptions {
   readonly scheme?: LatexScheme;
   /** Line width budget in em-like units before a formula line is broken (default 44). */
   readonly lineWidth?: number;
-  /** KaTeX fragment: start with the `\providecommand` lines (default true) or rely on KaTeX's `macros` option. */
+  /**
+   * KaTeX fragment: `inline` (default) starts with the `\providecommand` lines; `external` leaves
+   * the definitions to KaTeX's `macros` option (`katexMacros`); `expanded` writes every macro out.
+   * Large formulas need KaTeX's `maxExpand` raised unless expanded.
+   */
+  readonly macros?: 'inline' | 'external' | 'expanded';
+  /** Older spelling of `macros`: true is `inline`, false is `external` (`macros` wins when both are given). */
   readonly inlineMacros?: boolean;
   /** Recorded in the document's header. */
   readonly version?: string;
@@ -85,7 +91,7 @@ export interface ResolvedLatexOptions {
   readonly maxForestRows: number;
   readonly scheme: LatexScheme;
   readonly lineWidth: number;
-  readonly inlineMacros: boolean;
+  readonly macros: 'inline' | 'external' | 'expanded';
   readonly version: string;
 }
 
@@ -98,7 +104,7 @@ export function resolveLatexOptions(o: LatexOptions = {}): ResolvedLatexOptions 
     maxForestRows: o.maxForestRows ?? 200,
     scheme: o.scheme ?? 'symbolic',
     lineWidth: o.lineWidth ?? 44,
-    inlineMacros: o.inlineMacros ?? true,
+    macros: o.macros ?? (o.inlineMacros === false ? 'external' : 'inline'),
     version: o.version ?? 'unknown',
   };
 }

@@ -53,3 +53,11 @@ export function katexMacros(scheme: LatexScheme): Record<string, string> {
 export function withValueMacros(tex: string): string {
   return tex.replace(/\\zeta\((\d+)\)/g, '\\zetaval{$1}');
 }
+
+/**
+ * What the app passes to KaTeX for a fragment: our macros (a user's own entries may be spread
+ * over them) and an expansion limit large enough for big formulas (KaTeX's default is 1000).
+ */
+export function katexRenderSettings(scheme: LatexScheme): { macros: Record<string, string>; maxExpand: number } {
+  return { macros: katexMacros(scheme), maxExpand: 1_000_000 };
+}

@@ -6,6 +6,7 @@
 import { GraphSymbols } from './graph-symbols.ts';
 import { katexBody, type LatexBlock } from './latex-blocks.ts';
 import { resolveLatexOptions, type LatexDocument, type LatexOptions, type ResolvedLatexOptions } from './latex-document.ts';
+import { expandMacros } from './expand-macros.ts';
 import { macroDefinitions } from './latex-macros.ts';
 import { coproductBlocks } from './write-coproduct.ts';
 import { countertermBlocks } from './write-counterterm.ts';
@@ -27,7 +28,8 @@ export function toLatex(doc: LatexDocument, options: LatexOptions = {}): string 
   const blocks = blocksOf(doc, symbols, o);
   if (o.target === 'katex') {
     const body = katexBody(blocks);
-    return o.inlineMacros ? `${macroDefinitions(o.scheme).join('\n')}\n${body}` : body;
+    if (o.macros === 'expanded') return expandMacros(body, o.scheme);
+    return o.macros === 'inline' ? `${macroDefinitions(o.scheme).join('\n')}\n${body}` : body;
   }
   return fullDocument(doc, blocks, symbols.declarations(), o);
 }

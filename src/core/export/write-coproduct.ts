@@ -30,7 +30,7 @@ export function coproductBlocks(doc: CoproductDocument, symbols: GraphSymbols, o
   const classes = doc.terms.length;
   const note =
     `${doc.admissible} proper admissible subgraph${doc.admissible === 1 ? '' : 's'} in ${classes} class${classes === 1 ? '' : 'es'} of pairs $(\\gamma, \\Gr/\\gamma)$, ` +
-    'external legs unlabelled; the coefficient counts the subgraphs in a class, and one representative is named.';
+    'legs unlabelled; each term names one representative.';
   const formula: LatexBlock = {
     heading: doc.divergent ? 'Coproduct' : 'Coaction (superficially convergent graph: no $\\Gr\\tp\\unit$ term)',
     note,

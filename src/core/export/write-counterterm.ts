@@ -129,7 +129,7 @@ export function countertermBlocks(doc: CountertermDocument, symbols: GraphSymbol
       const head = o.target === 'katex' ? '\\text{forest} & \\text{sign} & \\text{term}' : 'forest & sign & term';
       const note = `The sum of the signed terms is ${tree.rootDivergent ? '$\\Sct(\\Gr)$' : '$\\Rbar(\\Gr)$'}.`;
       if (o.target === 'katex') {
-        blocks.push({ heading: 'Forest terms', note, array: `\\begin{array}{lcl}\n${[head + ' \\\\ \\hline', ...entries.map((e) => `${e.forest} & ${e.sign} & ${e.term}`)].join(' \\\\\n')}\n\\end{array}` });
+        blocks.push({ heading: 'Forest terms', note, array: `\\begin{array}{lcl}\n${head} \\\\ \\hline\n${entries.map((e) => `${e.forest} & ${e.sign} & ${e.term}`).join(' \\\\\n')}\n\\end{array}` });
       } else {
         const body = entries.map((e) => `$${e.forest}$ & $${e.sign}$ & $${e.term}$ \\\\`).join('\n');
         blocks.push({ heading: 'Forest terms', note, raw: `\\begin{longtable}{@{}l c l@{}}\n${head} \\\\ \\hline\\endhead\n${body}\n\\end{longtable}` });

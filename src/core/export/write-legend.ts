@@ -36,7 +36,7 @@ export function legendBlock(graphs: readonly LatexGraph[], theory: Theory, o: Re
     return {
       heading: 'Graphs',
       note,
-      array: `\\begin{array}{llllll}\n${[head + ' \\\\ \\hline', ...rows].join(' \\\\\n')}\n\\end{array}`,
+      array: `\\begin{array}{llllll}\n${head} \\\\ \\hline\n${rows.join(' \\\\\n')}\n\\end{array}`,
     };
   }
   const rows = graphs.map((g) =>
