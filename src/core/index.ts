@@ -11,3 +11,4 @@ export * from './periods/index.ts';
 export * from './canon/index.ts';
 export * from './hopf/index.ts';
 export * from './export/index.ts';
+export * from './generate/index.ts';

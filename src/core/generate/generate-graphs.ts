@@ -9,7 +9,7 @@ import { generationContext, type GenerationContext } from './generation-context.
 import { initialStates } from './initial-states.ts';
 import { LabelledCanonicalizer } from './labelled-canonical.ts';
 import { legLabellings, stateEdges, stateGraph } from './label-legs.ts';
-import { edgeFactor, freeAt, linesBetween, type PartialState } from './partial-state.ts';
+import { edgeFactor, freeAt, type PartialState } from './partial-state.ts';
 import { hasScalelessPart } from './scaleless-parts.ts';
 import { ColourTable, stateCanon } from './state-canonical.ts';
 import { isViable } from './state-viability.ts';
@@ -56,9 +56,9 @@ export interface GenerationResult {
 }
 
 /**
- * Picks the vertex to complete next: the one with free half-edges and the most lines drawn
- * (so the graph grows from what exists and closed parts show early), then the fewest free
- * half-edges (fewest fills), then the lowest index. Any choice would be correct (see below).
+ * Picks the vertex to complete next: the one with the fewest free half-edges (fewest fills),
+ * then the most half-edges already on lines (so the graph grows from what exists and closed
+ * parts show early), then the lowest index. Any choice would be correct (see below).
  */
 function chooseVertex(ctx: GenerationContext, s: PartialState): number {
   const nl = ctx.labels.length;
@@ -68,9 +68,10 @@ function chooseVertex(ctx: GenerationContext, s: PartialState): number {
   for (let v = 0; v < s.V; v++) {
     const f = freeAt(s, v, nl);
     if (f === 0) continue;
-    let lines = 0;
-    for (let w = 0; w < s.V; w++) if (w !== v) lines += linesBetween(ctx, s, v, w);
-    if (lines > bestLines || (lines === bestLines && f < bestFree)) {
+    // Half-edges already used by lines (self-loops count twice).
+    let lines = ctx.types[s.type[v]!]!.valence - f;
+    for (let l = 0; l < nl; l++) lines -= s.legs[v * nl + l]!;
+    if (f < bestFree || (f === bestFree && lines > bestLines)) {
       best = v;
       bestLines = lines;
       bestFree = f;

@@ -4,6 +4,7 @@ import { printNotation } from '../graph/notation-print.ts';
 import type { Edge, Graph, Leg, Vertex } from '../graph/types.ts';
 import type { GenerationContext } from './generation-context.ts';
 import type { PartialState } from './partial-state.ts';
+import { bundleCode } from './state-canonical.ts';
 
 /**
  * The canonical form with labelled legs of a generated graph, equal to what
@@ -16,10 +17,13 @@ import type { PartialState } from './partial-state.ts';
  */
 export class LabelledCanonicalizer {
   private readonly bundleKeys = new Map<number, string>();
+  private readonly oriented: readonly boolean[];
   constructor(
     private readonly ctx: GenerationContext,
     private readonly defaultField: string,
-  ) {}
+  ) {
+    this.oriented = ctx.kinds.map((k) => k.oriented);
+  }
 
   /** The key `colouredStructure` gives the bundle from u to v: its edge codes, sorted, joined. */
   private bundleKey(code: number): string {
@@ -56,9 +60,10 @@ export class LabelledCanonicalizer {
     const keys: string[] = [];
     for (let v = 0; v < n; v++) {
       const loops: string[] = [];
-      ctx.kinds.forEach((kind, k) => {
+      for (let k = 0; k < ctx.kinds.length; k++) {
+        const kind = ctx.kinds[k]!;
         for (let c = 0; c < s.loops[k * V + v]!; c++) loops.push(`${kind.oriented ? '>' : '-'}${kind.field}`);
-      });
+      }
       keys.push(`${legParts[v]!.length ? '0' : '1'}[${legParts[v]!.join(' ')}][${loops.sort().join(' ')}]`);
     }
     const sortedKeys = [...new Set(keys)].sort();
@@ -68,11 +73,7 @@ export class LabelledCanonicalizer {
     for (let u = 0; u < n; u++) {
       for (let v = 0; v < n; v++) {
         if (u === v) continue;
-        let code = 0;
-        ctx.kinds.forEach((kind, k) => {
-          code = code * 16 + s.mult[(k * V + u) * V + v]!;
-          if (kind.oriented) code = code * 16 + s.mult[(k * V + v) * V + u]!;
-        });
+        const code = bundleCode(this.oriented, s, u, v);
         codes[u * n + v] = code;
         if (code) present.add(code);
       }

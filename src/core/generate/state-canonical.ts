@@ -26,44 +26,51 @@ function vertexCode(ctx: GenerationContext, s: PartialState, v: number): number 
   return code;
 }
 
-/** The bundle of lines from u to v as a base-16 code (0: no line). */
-function bundleCode(ctx: GenerationContext, s: PartialState, u: number, v: number): number {
+/**
+ * The bundle of lines from u to v as a base-16 code (0: no line): one digit per kind, two
+ * for an arrow (u → v, then v → u).
+ */
+export function bundleCode(oriented: readonly boolean[], s: PartialState, u: number, v: number): number {
   const V = s.V;
+  const VV = V * V;
   let code = 0;
-  ctx.kinds.forEach((kind, k) => {
-    code = code * 16 + s.mult[(k * V + u) * V + v]!;
-    if (kind.oriented) code = code * 16 + s.mult[(k * V + v) * V + u]!;
-  });
+  for (let k = 0; k < oriented.length; k++) {
+    code = code * 16 + s.mult[k * VV + u * V + v]!;
+    if (oriented[k]) code = code * 16 + s.mult[k * VV + v * V + u]!;
+  }
   return code;
 }
 
 /** The state as the coloured bundle structure that the canonical-form search works on. */
 export function stateStructure(ctx: GenerationContext, s: PartialState, colours: ColourTable): ColouredStructure {
   const n = s.V;
+  const oriented = ctx.kinds.map((k) => k.oriented);
   const colour = new Int32Array(n);
   for (let v = 0; v < n; v++) colour[v] = colours.id(vertexCode(ctx, s, v));
   const bundle = new Int32Array(n * n);
   const adjStart = new Int32Array(n + 1);
+  let edges = 0;
   for (let u = 0; u < n; u++) {
     for (let v = u + 1; v < n; v++) {
-      const uv = bundleCode(ctx, s, u, v);
+      const uv = bundleCode(oriented, s, u, v);
       if (uv === 0) continue;
       bundle[u * n + v] = uv;
-      bundle[v * n + u] = bundleCode(ctx, s, v, u);
+      bundle[v * n + u] = bundleCode(oriented, s, v, u);
       adjStart[u + 1]!++;
       adjStart[v + 1]!++;
+      edges += 2;
     }
   }
   for (let u = 0; u < n; u++) adjStart[u + 1]! += adjStart[u]!;
-  const adjVertex = new Int32Array(adjStart[n]!);
-  const adjHash = new Int32Array(adjStart[n]!);
-  const fill = adjStart.slice(0, n);
+  const adjVertex = new Int32Array(edges);
+  const adjHash = new Int32Array(edges);
+  let at = 0;
   for (let u = 0; u < n; u++) {
+    const row = u * n;
     for (let v = 0; v < n; v++) {
-      if (v === u || bundle[u * n + v] === 0) continue;
-      const at = fill[u]!++;
+      if (v === u || bundle[row + v] === 0) continue;
       adjVertex[at] = v;
-      adjHash[at] = hashId(bundle[v * n + u]!);
+      adjHash[at++] = hashId(bundle[v * n + u]!);
     }
   }
   return { n, colour, bundle, adjStart, adjVertex, adjHash };

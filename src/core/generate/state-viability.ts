@@ -31,17 +31,17 @@ export function isViable(ctx: GenerationContext, s: PartialState, dropVanishing:
   }
   // Lines between distinct vertices, all kinds and directions, as a symmetric matrix.
   const m = new Int32Array(V * V);
-  ctx.kinds.forEach((kind, k) => {
-    const base = k * V * V;
-    for (let a = 0; a < V; a++) {
-      for (let b = 0; b < V; b++) {
-        const c = s.mult[base + a * V + b]!;
-        if (c === 0) continue;
-        m[a * V + b]! += c;
-        if (kind.oriented) m[b * V + a]! += c;
-      }
+  const VV = V * V;
+  for (let k = 0; k < K; k++) {
+    const base = k * VV;
+    const oriented = ctx.kinds[k]!.oriented;
+    for (let i = 0; i < VV; i++) {
+      const c = s.mult[base + i]!;
+      if (c === 0) continue;
+      m[i]! += c;
+      if (oriented) m[(i % V) * V + Math.floor(i / V)]! += c;
     }
-  });
+  }
   const disc = new Int32Array(V).fill(-1);
   const low = new Int32Array(V);
   const subFree = new Int32Array(V);
