@@ -144,25 +144,102 @@ function expFormOf(node: Extract<ExprNode, { kind: 'call' }>, cap: number, ctx: 
   return gammaExpForm(n, delta, cap);
 }
 
-function evaluateProduct(factors: Extract<ExprNode, { kind: 'product' }>['factors'], cap: number, ctx: Ctx): Series {
-  // Gamma/exp factors gather into one exponential form; headroom for their poles.
-  const special = factors.filter((f) => f.node.kind === 'call' && (f.node.fn === 'Gamma' || f.node.fn === 'exp')).length;
-  let form: ExpForm = EXP_FORM_ONE;
-  let numerator = Series.ONE;
-  let denominator = Series.ONE;
+type ProductFactors = Extract<ExprNode, { kind: 'product' }>['factors'];
+type CallNode = Extract<ExprNode, { kind: 'call' }>;
+interface Flat {
+  readonly sign: 1 | -1;
+  readonly node: ExprNode;
+  readonly offset: number;
+}
+
+/** Flattens nested products: a/(b*c) becomes a, b⁻¹, c⁻¹. */
+function flatten(factors: ProductFactors, sign: 1 | -1, out: Flat[]): Flat[] {
   for (const f of factors) {
-    const n = f.node;
-    if (n.kind === 'call' && (n.fn === 'Gamma' || n.fn === 'exp')) {
-      const g = located(n, ctx, () => expFormOf(n, cap + special, ctx));
-      form = mulExpForms(form, f.op === '*' ? g : located(n, ctx, () => invertExpForm(g)));
+    const s = (f.op === '*' ? sign : -sign) as 1 | -1;
+    if (f.node.kind === 'product') flatten(f.node.factors, s, out);
+    else out.push({ sign: s, node: f.node, offset: f.offset });
+  }
+  return out;
+}
+
+/** Γ(x)^k or exp(x)^k with an integer literal k (k = 1 for a bare call). */
+function gammaLike(node: ExprNode): { call: CallNode; k: number } | undefined {
+  const isCall = (n: ExprNode): n is CallNode => n.kind === 'call' && (n.fn === 'Gamma' || n.fn === 'exp');
+  if (isCall(node)) return { call: node, k: 1 };
+  if (node.kind !== 'power' || !isCall(node.base)) return undefined;
+  let e = node.exponent;
+  let sign = 1;
+  if (e.kind === 'neg') {
+    sign = -1;
+    e = e.arg;
+  }
+  if (e.kind !== 'number' || !(e.value instanceof Rational) || !e.value.isInteger() || e.value.abs().compare(Rational.int(64)) > 0) return undefined;
+  return { call: node.base, k: sign * Number(e.value.n) };
+}
+
+function powExpForm(f: ExpForm, k: number): ExpForm {
+  const base = k < 0 ? invertExpForm(f) : f;
+  const m = Math.abs(k);
+  return { prefactor: base.prefactor.pow(m), epsPower: base.epsPower * m, log: base.log.scale(Rational.int(m)) };
+}
+
+/**
+ * A product: Gamma/exp factors (with integer powers) go into one exponential form, the
+ * others are multiplied or divided as series. The leading power V of the whole product is
+ * found first, so that every piece is computed to exactly the relative precision cap − V.
+ */
+function evaluateProduct(factors: ProductFactors, cap: number, ctx: Ctx): Series {
+  const flat = flatten(factors, 1, []);
+  const special: { f: Flat; call: CallNode; k: number; arg: Series; pole: number }[] = [];
+  const regular: { f: Flat; value: Series }[] = [];
+  let V = 0;
+  for (const f of flat) {
+    const g = gammaLike(f.node);
+    if (g) {
+      const arg = evaluate(g.call.arg, cap, ctx);
+      let pole = 0;
+      if (g.call.fn === 'Gamma') {
+        const { n, delta } = located(g.call, ctx, () => splitGammaArgument(arg));
+        if (n <= 0 && Number.isFinite(delta.val)) pole = delta.val;
+      }
+      special.push({ f, call: g.call, k: g.k * f.sign, arg, pole });
+      V -= pole * g.k * f.sign;
     } else {
-      const v = evaluate(n, cap + special, ctx);
-      if (f.op === '*') numerator = numerator.mul(v);
-      else denominator = denominator.mul(v);
+      const value = evaluate(f.node, cap, ctx);
+      regular.push({ f, value });
+      if (Number.isFinite(value.val)) V += f.sign * value.val;
     }
   }
-  const main = form === EXP_FORM_ONE ? Series.ONE : expFormToSeries(form, cap + special);
+  const rel = cap - V;
+  let form: ExpForm = EXP_FORM_ONE;
+  for (const sp of special) {
+    const arg = rel > cap && sp.arg.order < rel ? evaluate(sp.call.arg, rel, ctx) : sp.arg;
+    const one = located(sp.call, ctx, (): ExpForm => {
+      if (sp.call.fn === 'exp') {
+        if (arg.val < 1 && !arg.isZero()) {
+          throw new AlgebraError(
+            arg.val < 0 ? 'exp of a series with a pole in eps has no Laurent expansion' : 'exp of an argument that does not vanish at eps = 0 is not exact',
+            'exp(...) takes arguments like euler_gamma*eps; move constant factors outside',
+          );
+        }
+        return { prefactor: Poly.ONE, epsPower: 0, log: arg };
+      }
+      const { n, delta } = splitGammaArgument(arg);
+      return gammaExpForm(n, delta, rel);
+    });
+    form = mulExpForms(form, located(sp.f, ctx, () => powExpForm(one, sp.k)));
+  }
+  let numerator = Series.ONE;
+  let denominator = Series.ONE;
+  for (const r of regular) {
+    let v = r.value;
+    const need = (Number.isFinite(v.val) ? v.val : 0) + rel;
+    if (v.order < need && need > cap) v = evaluate(r.f.node, need, ctx);
+    if (r.f.sign === 1) numerator = numerator.mul(v);
+    else denominator = denominator.mul(v);
+  }
+  const main = form === EXP_FORM_ONE ? Series.ONE : expFormToSeries(form, cap - (V - form.epsPower));
   const top = numerator.mul(main);
   if (denominator === Series.ONE) return top.truncate(cap);
-  return located(factors.find((f) => f.op === '/')!, ctx, () => divide(top, denominator, cap));
+  return located(flat.find((f) => f.sign === -1)!, ctx, () => divide(top, denominator, cap));
 }
