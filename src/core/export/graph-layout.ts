@@ -156,8 +156,10 @@ export function layoutGraph(g: Graph): GraphLayout {
     const dirs = allocate(occupied[k]!, loops.length, outward(k));
     loops.forEach(([e, i], j) => {
       const th = dirs[j]!;
-      const c1 = pt(v.x + LOOP * Math.cos(th - 0.5), v.y + LOOP * Math.sin(th - 0.5));
-      const c2 = pt(v.x + LOOP * Math.cos(th + 0.5), v.y + LOOP * Math.sin(th + 0.5));
+      // A lone vertex's loops are drawn larger, so a wavy or curly loop stays legible.
+      const size = n === 1 ? LOOP * 1.5 : LOOP;
+      const c1 = pt(v.x + size * Math.cos(th - 0.5), v.y + size * Math.sin(th - 0.5));
+      const c2 = pt(v.x + size * Math.cos(th + 0.5), v.y + size * Math.sin(th + 0.5));
       edges.push({ index: i, from: v, c1, c2, to: v, field: e.field, arrow: e.oriented });
       occupied[k]!.push(th - 0.45, th + 0.45);
     });
