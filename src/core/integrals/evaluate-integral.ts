@@ -4,10 +4,10 @@ import { Series } from '../algebra/series.ts';
 import { inverse } from '../algebra/series-inverse.ts';
 import { LimitError } from '../errors.ts';
 import { neverCancel, type CancelToken } from '../util/cancel.ts';
-import { gFunction } from './g-function.ts';
+import { gFunction, type LoopMeasure } from './g-function.ts';
 import { findCut } from './graph-cuts.ts';
 import { integralKey } from './integral-key.ts';
-import { addIndex, indexSeries, indexText } from './line-index.ts';
+import { addIndex, indexSeries, indexText, type LineIndex } from './line-index.ts';
 import { loopsOf, type PropIntegral } from './prop-integral.ts';
 import { simplifyIntegral } from './simplify-integral.ts';
 import { findTriangles, triangleDenominator } from './triangle-rule.ts';
@@ -19,6 +19,8 @@ export interface EvaluatorOptions {
   readonly D0: number;
   /** The scheme's per-loop measure factor, exact through ε^order. */
   readonly loopFactor: (order: number) => Series;
+  /** The same factor as Gammas, folded into each G-function's Gamma product when given. */
+  readonly measure?: LoopMeasure;
   readonly cancel?: CancelToken;
   /** Integrals evaluated (memo entries) before giving up. */
   readonly maxIntegrals?: number;
@@ -79,6 +81,22 @@ export class IntegralEvaluator {
     return value;
   }
 
+  private readonly bubbles = new Map<string, Series>();
+
+  /** G(ν1,ν2) times the loop factor, exact through ε^k; cached (G is symmetric), reused when known further. */
+  private bubbleFactor(x: LineIndex, y: LineIndex, k: number): Series {
+    const [p, q] = [indexText(x), indexText(y)].sort();
+    const key = `${p}|${q}`;
+    const hit = this.bubbles.get(key);
+    if (hit && hit.order >= k) return hit;
+    const m = this.opts.measure;
+    const g = gFunction(x, y, this.opts.D0, k + 1, m);
+    if (!g) throw new NotEvaluable(`a one-loop bubble with indices ${indexText(x)}, ${indexText(y)} has an unregulated divergence`);
+    const v = m || g.isZero() ? g : g.mul(this.loopFactor(k + 2 - g.val)).truncate(k + 1);
+    this.bubbles.set(key, v);
+    return v;
+  }
+
   private loopFactor(order: number): Series {
     const hit = this.loopFactors.get(order);
     if (hit) return hit;
@@ -99,11 +117,7 @@ export class IntegralEvaluator {
         const rest: PropIntegral = { ...I, lines: [...I.lines.filter((_, k) => k !== i && k !== j), { u: a.u, v: a.v, index: merged }] };
         this.log.bubbles++;
         return this.product(
-          (k) => {
-            const g = gFunction(a.index, b.index, this.opts.D0, k);
-            if (!g) throw new NotEvaluable(`a one-loop bubble with indices ${indexText(a.index)}, ${indexText(b.index)} has an unregulated divergence`);
-            return g.mul(this.loopFactor(k + 2));
-          },
+          (k) => this.bubbleFactor(a.index, b.index, k),
           (k) => this.evaluate(rest, k),
           order,
           2 * L,

@@ -60,7 +60,7 @@ export class CountertermEngine {
   ) {
     this.algebra = new HopfAlgebra(theory, unlabelledLegsClassifier);
     this.cancel = opts.cancel ?? neverCancel;
-    this.evaluator = new IntegralEvaluator({ D0: theory.dimension, loopFactor: (k) => scheme.loopFactor(theory.dimension, k), cancel: this.cancel });
+    this.evaluator = new IntegralEvaluator({ D0: theory.dimension, loopFactor: (k) => scheme.loopFactor(theory.dimension, k), measure: scheme.measure(theory.dimension), cancel: this.cancel });
     if (!scheme.minimal) throw new Error('CountertermEngine handles the minimal schemes; use the momentum-subtraction engine for mom');
   }
 

@@ -34,7 +34,7 @@ export type MomResult =
  */
 export function momCounterterm(theory: Theory, bg: BoundGraph, opts: { cancel?: CancelToken } = {}): MomResult {
   const H = new HopfAlgebra(theory, unlabelledLegsClassifier);
-  const ev = new IntegralEvaluator({ D0: theory.dimension, loopFactor: (k) => schemeOf('mom').loopFactor(theory.dimension, k), cancel: opts.cancel ?? neverCancel });
+  const ev = new IntegralEvaluator({ D0: theory.dimension, loopFactor: (k) => schemeOf('mom').loopFactor(theory.dimension, k), measure: schemeOf('mom').measure(theory.dimension), cancel: opts.cancel ?? neverCancel });
   const memo = new Map<string, { value: Series } | { reason: string }>();
 
   const subtracted = (a: GraphAnalysis, r: Routing, order: number): ScalingTerm[] => {

@@ -4,7 +4,7 @@ import { Rational } from '../algebra/rational.ts';
 import { Series } from '../algebra/series.ts';
 import { InputError } from '../errors.ts';
 import { inverse } from '../algebra/series-inverse.ts';
-import { gFunction } from '../integrals/g-function.ts';
+import { gFunction, gFunctionGammas, PLAIN_MEASURE, type LoopMeasure } from '../integrals/g-function.ts';
 
 /**
  * Renormalization schemes (DESIGN §6). Every scheme fixes the per-loop normalization of the
@@ -22,6 +22,8 @@ export const SCHEME_NAMES: readonly SchemeName[] = ['ms', 'msbar', 'g', 'mom'];
 export interface Scheme {
   readonly name: SchemeName;
   readonly minimal: boolean;
+  /** The per-loop factor of the measure as Gammas, e^{γε} and a power of ε. */
+  measure(D0: number): LoopMeasure;
   /** The per-loop factor of the measure, as a series exact through ε^order. */
   loopFactor(D0: number, order: number): Series;
   readonly description: string;
@@ -35,20 +37,25 @@ export function parseScheme(name: string): Scheme {
   return schemeOf(n as SchemeName);
 }
 
+const E_GAMMA_MEASURE: LoopMeasure = { num: [], den: [], expEulerGamma: 1, epsPower: 0 };
 const eGammaEps = (order: number) => gammaProduct({ num: [], expEulerGamma: 1 }, order);
 
 export function schemeOf(name: SchemeName): Scheme {
   switch (name) {
     case 'ms':
-      return { name, minimal: true, loopFactor: () => Series.ONE, description: 'MS: measure d^Dk/pi^{D/2} per loop, R = pole part' };
+      return { name, minimal: true, measure: () => PLAIN_MEASURE, loopFactor: () => Series.ONE, description: 'MS: measure d^Dk/pi^{D/2} per loop, R = pole part' };
     case 'msbar':
-      return { name, minimal: true, loopFactor: (_D0, order) => eGammaEps(order), description: 'MS-bar: measure e^{gamma_E eps} d^Dk/pi^{D/2} per loop, R = pole part' };
+      return { name, minimal: true, measure: () => E_GAMMA_MEASURE, loopFactor: (_D0, order) => eGammaEps(order), description: 'MS-bar: measure e^{gamma_E eps} d^Dk/pi^{D/2} per loop, R = pole part' };
     case 'mom':
-      return { name, minimal: false, loopFactor: (_D0, order) => eGammaEps(order), description: 'MOM: subtraction at p^2 = mu^2 (two-point) and at the exceptional point p in at leg 1, out at leg 2 (four-point)' };
+      return { name, minimal: false, measure: () => E_GAMMA_MEASURE, loopFactor: (_D0, order) => eGammaEps(order), description: 'MOM: subtraction at p^2 = mu^2 (two-point) and at the exceptional point p in at leg 1, out at leg 2 (four-point)' };
     case 'g':
       return {
         name,
         minimal: true,
+        measure(D0) {
+          const g0 = gFunctionGammas({ a: 1, b: Rational.ZERO }, { a: D0 / 2 - 1, b: Rational.ZERO }, D0);
+          return { num: g0.den, den: g0.num, expEulerGamma: 0, epsPower: -1 };
+        },
         loopFactor(D0, order) {
           // 1/(ε G0): G0 = G(1,1) in D0 = 4, G(1, D0/2 − 1) in general (indices summing to D0/2).
           const one = { a: 1, b: Rational.ZERO };

@@ -1,0 +1,47 @@
+import { describe, expect, it } from 'vitest';
+import { cli } from '../helpers/cli.ts';
+
+describe('coppice counterterm --scheme', () => {
+  it('JSON shape for the nested two-loop graph (MS-bar)', async () => {
+    const r = await cli('counterterm', '--theory', 'phi4', '--scheme', 'msbar', '--graph', '1-2 1-2 1-3 2-3 / 1 2 3 3', '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.out);
+    expect(j).toMatchObject({ scheme: 'msbar', evaluable: true, counterterm: { '-2': '1/2', '-1': '-1/2' }, finite: true, local: true, routingsAgree: true, rgConsistent: true });
+    expect(j.routing).toHaveLength(2);
+    expect(j.routingsCompared).toBeGreaterThanOrEqual(2);
+    expect(typeof j.method).toBe('string');
+    expect(Object.keys(j.renormalized)).toEqual(['0', '1', '2']);
+  });
+  it('not evaluable: reason given, exit 0 (nothing failed)', async () => {
+    const r = await cli('counterterm', '--theory', 'phi4', '--scheme', 'ms', '--graph', '1-3 1-4 2-3 2-4 3-4 3-4 / 1 1 2 2', '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.out);
+    expect(j.evaluable).toBe(false);
+    expect(j.reason).toMatch(/routing/);
+  });
+  it('fermion theories say plainly that values must be supplied', async () => {
+    const j = JSON.parse((await cli('counterterm', '--theory', 'qed', '--scheme', 'msbar', '--graph', '1>2 2>1 / 1 2', '--json')).out);
+    expect(j.evaluable).toBe(false);
+    expect(j.reason).toMatch(/supply/);
+  });
+  it('momentum subtraction: the labelled t-channel bubble subtracted at p² = μ² (through ε⁰)', async () => {
+    const j = JSON.parse((await cli('counterterm', '--theory', 'phi4', '--scheme', 'mom', '--graph', '1-2 1-2 / 1 2 1 2', '--json')).out);
+    // −G(1,1)e^{γε} = −1/ε − 2 + O(ε) (REFERENCES.md: G(1,1) = 1/ε + 2 + O(ε)).
+    expect(j.counterterm).toEqual({ '-1': '-1', '0': '-2' });
+    expect(j.renormalized).toEqual({ '0': '0', '1': '-1' });
+  });
+  it('momentum subtraction refuses an infrared-unsafe exceptional point', async () => {
+    const j = JSON.parse((await cli('counterterm', '--theory', 'phi4', '--scheme', 'mom', '--graph', '1-2 1-2 / 1 1 2 2', '--json')).out);
+    expect(j.evaluable).toBe(false);
+    expect(j.reason).toMatch(/same vertex/);
+  });
+  it('an unknown scheme is bad input', async () => {
+    const r = await cli('counterterm', '--theory', 'phi4', '--scheme', 'dimred', '--graph', '1-2 1-2 / 1 1 2 2');
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/unknown scheme/);
+  });
+  it('human output names the checks', async () => {
+    const r = await cli('counterterm', '--theory', 'phi3', '--scheme', 'msbar', '--graph', '1-2 2-3 3-1 / 1 2 3');
+    expect(r.out).toMatch(/finite: pass/);
+  });
+});
