@@ -41,7 +41,7 @@ export async function startHarness(): Promise<Harness> {
 }
 
 /** A fresh page on the app (fresh storage), with console errors collected. */
-export async function openApp(h: Harness): Promise<{ page: Page; errors: string[] }> {
+export async function openApp(h: Harness, query = ''): Promise<{ page: Page; errors: string[] }> {
   const context = await h.browser.newContext({ viewport: { width: 1400, height: 860 }, acceptDownloads: true });
   const page = await context.newPage();
   const errors: string[] = [];
@@ -50,7 +50,7 @@ export async function openApp(h: Harness): Promise<{ page: Page; errors: string[
   });
   page.on('pageerror', (e) => errors.push(e.message));
   page.on('dialog', (d) => void d.accept());
-  await page.goto(h.url);
+  await page.goto(`${h.url}${query}`);
   await page.waitForSelector('[data-ready="yes"]');
   return { page, errors };
 }

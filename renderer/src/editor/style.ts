@@ -7,6 +7,8 @@ import type { StylesheetJson } from 'cytoscape';
 
 export const INK = '#27323a';
 export const WARN = '#b3261e';
+/** Marks of subgraphs pointed at from the workbench. */
+export const MARK = '#2f6f8f';
 const crossedCircle =
   'data:image/svg+xml;utf8,' +
   encodeURIComponent('<svg xmlns="http://www.w3.org/2000/svg" width="24" height="24"><circle cx="12" cy="12" r="10.5" fill="white" stroke="#27323a" stroke-width="2"/><path d="M5 5L19 19M19 5L5 19" stroke="#27323a" stroke-width="2"/></svg>');
@@ -49,5 +51,22 @@ export function canvasStyle(): StylesheetJson {
     { selector: 'edge.invalid', style: { 'line-color': WARN, width: 3.5, 'mid-target-arrow-color': WARN } },
     { selector: ':selected', style: { 'underlay-color': '#d9a441', 'underlay-opacity': 0.45, 'underlay-padding': 6 } },
     { selector: '.hovered', style: { 'underlay-color': '#3f7d6e', 'underlay-opacity': 0.3, 'underlay-padding': 7 } },
+    // Subgraphs a panel points at, by nesting depth (1 = outermost member). Depth shows without
+    // colour: lines get heavier and wider halos, vertices more rings; lines carry the innermost
+    // member's name.
+    { selector: 'edge.mark-1', style: { width: 4, 'underlay-color': MARK, 'underlay-opacity': 0.22, 'underlay-padding': 5 } },
+    { selector: 'edge.mark-2', style: { width: 6, 'underlay-color': MARK, 'underlay-opacity': 0.32, 'underlay-padding': 9 } },
+    { selector: 'edge.mark-3', style: { width: 8, 'underlay-color': MARK, 'underlay-opacity': 0.42, 'underlay-padding': 13 } },
+    {
+      selector: 'edge[markLabel]',
+      style: {
+        label: 'data(markLabel)', 'font-size': 11, 'font-family': 'system-ui, sans-serif', color: INK, 'text-background-color': '#ffffff',
+        'text-background-opacity': 0.9, 'text-background-padding': '2px', 'text-background-shape': 'roundrectangle', 'text-border-width': 1,
+        'text-border-color': MARK, 'text-border-opacity': 1,
+      },
+    },
+    { selector: 'node.vertex.mark-1', style: { 'outline-width': 2, 'outline-color': MARK, 'outline-offset': 2, 'outline-opacity': 1 } },
+    { selector: 'node.vertex.mark-2', style: { 'outline-width': 5, 'outline-style': 'double', 'outline-color': MARK, 'outline-offset': 2, 'outline-opacity': 1 } },
+    { selector: 'node.vertex.mark-3', style: { 'outline-width': 8, 'outline-style': 'double', 'outline-color': MARK, 'outline-offset': 2, 'outline-opacity': 1, 'border-width': 2, 'border-color': '#ffffff' } },
   ];
 }

@@ -83,10 +83,12 @@ export function browserPlatform(storage: Storage | undefined = globalThis.localS
   const link = (() => {
     try {
       const q = new URLSearchParams(globalThis.location?.search ?? '');
-      const notation = q.get('notation');
+      // `graph` is the documented name; `notation` is accepted too.
+      const notation = q.get('graph') ?? q.get('notation');
       if (!notation) return undefined;
       const theory = q.get('theory');
-      return { notation, ...(theory ? { theory } : {}) } as GraphLink;
+      const name = q.get('name');
+      return { notation, ...(theory && /^[A-Za-z0-9_-]{1,64}$/.test(theory) ? { theory } : {}), ...(name ? { name: name.slice(0, 200) } : {}) } as GraphLink;
     } catch {
       return undefined;
     }

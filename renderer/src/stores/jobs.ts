@@ -24,6 +24,10 @@ let makeRunner: () => JobRunner = inProcessRunner;
 export function setJobRunnerFactory(f: () => JobRunner): void {
   makeRunner = f;
 }
+/** A runner of its own (each store that runs jobs concurrently with others takes one). */
+export function createJobRunner(): JobRunner {
+  return makeRunner();
+}
 
 export const useJobsStore = defineStore('jobs', () => {
   const status = ref<JobStatus>('idle');

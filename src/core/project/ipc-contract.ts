@@ -95,7 +95,7 @@ export const MENU_COMMANDS: readonly MenuCommand[] = [
 export const LINK_SCHEME = 'coppice';
 export const APP_SCHEME = 'coppice-app';
 
-/** Parses `coppice://graph?notation=…&theory=…&name=…`; null when it is not such a link. */
+/** Parses `coppice://graph?graph=…&theory=…&name=…` (or `notation=…`); null when it is not such a link. */
 export function parseGraphLink(url: string): GraphLink | null {
   const m = /^coppice:\/\/\/?graph\/?\?(.*)$/i.exec(url.trim());
   if (!m || url.length > 200_000) return null;
@@ -109,7 +109,8 @@ export function parseGraphLink(url: string): GraphLink | null {
       return null;
     }
   }
-  const notation = params.get('notation');
+  // `graph` as in the renderer's address (`?theory=…&graph=…`); `notation` as written by graphLink.
+  const notation = params.get('graph') ?? params.get('notation');
   if (!notation || notation.length > 100_000) return null;
   const theory = params.get('theory');
   const name = params.get('name');

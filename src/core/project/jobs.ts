@@ -10,6 +10,9 @@ import { bindGraph } from '../theory/bind-graph.ts';
 import { parseTheory } from '../theory/parse-theory.ts';
 import type { Theory } from '../theory/types.ts';
 import { neverCancel, type CancelToken } from '../util/cancel.ts';
+import { runForestPage, runLatex, runStructure, type ForestPageJob, type ForestPageResult, type LatexJob, type LatexResult, type StructureJob, type StructureResult } from './structure-job.ts';
+
+export type * from './structure-job.ts';
 
 /** Power counting and divergent subgraphs of one graph (what `coppice inspect` reports). */
 export interface InspectJob {
@@ -18,7 +21,7 @@ export interface InspectJob {
   readonly notation: string;
 }
 
-export type JobRequest = InspectJob;
+export type JobRequest = InspectJob | StructureJob | ForestPageJob | LatexJob;
 
 /** `coppice inspect --json`'s stable shape (counts beyond 2^53 − 1 as decimal strings). */
 export interface InspectSummary {
@@ -41,7 +44,7 @@ export interface InspectResult {
   readonly summary: InspectSummary;
 }
 
-export type JobResult = InspectResult;
+export type JobResult = InspectResult | StructureResult | ForestPageResult | LatexResult;
 
 export type JobOutcome =
   | { readonly ok: true; readonly result: JobResult }
@@ -72,6 +75,12 @@ export function runJob(req: JobRequest, ctx: JobContext = {}): JobOutcome {
         ctx.progress?.({ fraction: 1, stage: 'done' });
         return { ok: true, result: { kind: 'inspect', summary: { ...(graphReportToJSON(report) as unknown as InspectSummary), divergent: report.divergent } } };
       }
+      case 'structure':
+        return { ok: true, result: runStructure(req, cancel, (fraction, stage) => ctx.progress?.({ fraction, stage })) };
+      case 'forest-page':
+        return { ok: true, result: runForestPage(req, cancel) };
+      case 'latex':
+        return { ok: true, result: runLatex(req) };
     }
   } catch (e) {
     if (e instanceof CoppiceError) return { ok: false, error: e.hint ? { name: e.name, message: e.message, hint: e.hint } : { name: e.name, message: e.message } };

@@ -83,7 +83,7 @@ describe('document graph', () => {
 describe('jobs, codec and links', () => {
   it('runs inspect in-process with the stable JSON shape', () => {
     const out = runJob({ kind: 'inspect', theory: builtinTheory('phi4'), notation: '1-2 1-2 / 1 1 2 2' });
-    expect(out.ok && out.result.summary).toMatchObject({ loops: 1, omega: 0, divergent: true, residue: ['phi', 'phi', 'phi', 'phi'] });
+    expect(out.ok && out.result.kind === 'inspect' && out.result.summary).toMatchObject({ loops: 1, omega: 0, divergent: true, residue: ['phi', 'phi', 'phi', 'phi'] });
   });
   it('returns errors instead of throwing', () => {
     const out = runJob({ kind: 'inspect', theory: builtinTheory('phi4'), notation: '1-2 / 1' });
