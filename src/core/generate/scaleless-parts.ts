@@ -28,7 +28,11 @@ export function hasScalelessPart(g: Graph): boolean {
       while (stack.length) {
         const u = stack.pop()!;
         legs += hasLeg[u]!;
-        for (const w of adj[u]!) if (!seen[w]) (seen[w] = 1), stack.push(w);
+        for (const w of adj[u]!) {
+          if (seen[w]) continue;
+          seen[w] = 1;
+          stack.push(w);
+        }
       }
       if (legs === 0) return true;
     }
