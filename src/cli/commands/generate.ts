@@ -18,7 +18,7 @@ carries 1/S) and, in theories with an internal symmetry, its group factor.
   --loops       loop number L
   --all         keep graphs with scaleless tadpole parts (self-loops, parts hanging at one
                 vertex), which vanish in massless dimensional regularization; they are marked
-  --max-graphs  refuse requests whose estimated number of graphs exceeds N (default 1000000)
+  --max-graphs  refuse requests whose estimated number of graphs exceeds N (default 3000000)
   --json        {"theory", "legs", "loops", "all", "count", "weight": "<exact Σ 1/S>",
                  "graphs": [{"notation", "symmetryFactor", "groupFactor" (theories with a
                  tensor), "vanishes", "vertices"}]}
@@ -51,7 +51,7 @@ export const generateCommand: Command = {
     const loops = intFlag(args, 'loops', -1);
     if (loops < 0) requireFlag(args, 'loops', 'e.g. --loops 2');
     const all = hasFlag(args, 'all');
-    const maxGraphs = intFlag(args, 'max-graphs', 1_000_000);
+    const maxGraphs = intFlag(args, 'max-graphs', 3_000_000);
     const result = generateGraphs(theory, { residue, loops, all, limits: { maxGraphs }, cancel: io.cancel });
     const tensors = hasGroupFactors(theory);
     const factor = (g: GeneratedGraph) => (tensors ? groupFactor(theory, g.graph)!.text : undefined);
