@@ -16,7 +16,7 @@ export interface GroupFactor {
 }
 
 /** Vertex tensors the engine knows how to contract. */
-export const KNOWN_TENSORS: readonly string[] = ['on-symmetric-delta-delta'];
+import { KNOWN_TENSORS } from '../theory/parse-theory.ts';
 
 /** Whether the theory's vertices carry internal-symmetry tensors (then graphs have group factors). */
 export function hasGroupFactors(theory: Theory): boolean {

@@ -1,2 +1,2 @@
-export { groupFactor, hasGroupFactors, KNOWN_TENSORS, type GroupFactor } from './group-factor.ts';
+export { groupFactor, hasGroupFactors, type GroupFactor } from './group-factor.ts';
 export { onTensor, type LegPairingTerm, type OnTensor } from './on-group-factor.ts';
