@@ -6,7 +6,7 @@ import NotationBox from '../../renderer/src/components/NotationBox.vue';
 import PowerCounting from '../../renderer/src/components/PowerCounting.vue';
 import { browserPlatform, RECOVERY_KEY } from '../../renderer/src/platform/platform.ts';
 import { useDocumentStore } from '../../renderer/src/stores/document.ts';
-import { useJobsStore } from '../../renderer/src/stores/jobs.ts';
+import { useStructureStore } from '../../renderer/src/stores/structure.ts';
 
 describe('panels', () => {
   beforeEach(() => {
@@ -47,7 +47,8 @@ describe('panels', () => {
     expect(power.get('[data-testid=pc-loops]').text()).toBe('1');
     expect(power.get('[data-testid=pc-omega]').text()).toBe('0');
     expect(power.get('[data-testid=pc-divergent]').text()).toMatch(/yes/);
-    expect(useJobsStore().status).toBe('done');
+    expect(useStructureStore().status).toBe('done');
+    expect(power.get('[data-testid=pc-symmetry]').text()).toMatch(/S=2/);
   });
 
   it('the browser fallback autosaves to localStorage and offers it back', async () => {
