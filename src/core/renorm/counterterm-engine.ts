@@ -13,6 +13,7 @@ import { loopsOf, type PropIntegral } from '../integrals/prop-integral.ts';
 import type { Scheme } from '../schemes/scheme.ts';
 import { neverCancel, type CancelToken } from '../util/cancel.ts';
 import { infraredDivergence } from './infrared-safety.ts';
+import { infraredSubtractions } from './infrared-rstar.ts';
 import { atReferencePoint, isLocal, logCoefficient, type ScalingTerm } from './momentum-series.ts';
 import { routedIntegral } from './routed-integral.ts';
 import { choosePairs, type Routing } from './routings.ts';
@@ -86,15 +87,19 @@ export class CountertermEngine {
     const found: { routing: Routing; value: Series; terms: ScalingTerm[]; local: boolean; method: string }[] = [];
     const reasons: string[] = [];
     const want = Math.max(1, this.opts.compareRoutings ?? 2);
-    for (const r of pairs.pairs) {
-      if (found.length >= want) break;
-      const tried = this.subtractedOnRouting(a, r);
-      if (!tried.ok) {
-        reasons.push(tried.reason);
-        continue;
+    // Infrared-safe routings first; then, for what is still missing, routings made safe by R*.
+    for (const rstar of [false, true]) {
+      for (const r of pairs.pairs) {
+        if (found.length >= want) break;
+        if (found.some((f) => f.routing === r)) continue;
+        const tried = this.subtractedOnRouting(a, r, rstar);
+        if (!tried.ok) {
+          if (!rstar) reasons.push(tried.reason);
+          continue;
+        }
+        const K = polePart(atReferencePoint(tried.terms));
+        found.push({ routing: r, value: K.neg(), terms: tried.terms, local: isLocal(tried.terms, a.bound.graph.edges.length), method: tried.method });
       }
-      const K = polePart(atReferencePoint(tried.terms));
-      found.push({ routing: r, value: K.neg(), terms: tried.terms, local: isLocal(tried.terms, a.bound.graph.edges.length), method: tried.method });
     }
     if (found.length === 0) {
       return { ok: false, reason: `no routing of the external momentum is both infrared safe and evaluable; ${summarize(reasons)}` };
@@ -109,14 +114,31 @@ export class CountertermEngine {
   }
 
   /** R̄Γ on one routing, term by term, or why the routing fails. */
-  subtractedOnRouting(a: GraphAnalysis, r: Routing): { ok: true; terms: ScalingTerm[]; method: string } | { ok: false; reason: string } {
+  subtractedOnRouting(a: GraphAnalysis, r: Routing, rstar = false): { ok: true; terms: ScalingTerm[]; method: string } | { ok: false; reason: string } {
     const bg = a.bound;
     const where = `routing ${bg.graph.vertices[r.u]!.name}→${bg.graph.vertices[r.v]!.name}`;
     const main = routedIntegral(bg, r.u, r.v);
     if (!main.ok) return { ok: false, reason: main.reason };
-    const ir = infraredDivergence(main.integral, this.theory.dimension);
-    if (ir) return { ok: false, reason: `${where}: the graph is infrared divergent when lines ${ir.softLines.map((k) => k + 1).join(',')} go soft` };
-    const pieces: { coefficient: Series; integral: PropIntegral }[] = [{ coefficient: Series.ONE, integral: main.integral }];
+    const pieces: { coefficient: Series; integral: PropIntegral }[] = [];
+    let irTerms = 0;
+    // R̃ on one term of R̄: the term itself when infrared safe, else its infrared subtractions (R*).
+    const addPiece = (coefficient: Series, integral: PropIntegral, what: string): string | null => {
+      const ir = infraredDivergence(integral, this.theory.dimension);
+      if (!ir) {
+        pieces.push({ coefficient, integral });
+        return null;
+      }
+      if (!rstar) return `${where}: ${what} is infrared divergent when lines ${ir.softLines.map((k) => k + 1).join(',')} go soft`;
+      const sub = infraredSubtractions(integral, this.theory.dimension);
+      if (!sub.ok) return `${where}: ${what}: ${sub.reason}`;
+      for (const t of sub.terms) {
+        pieces.push({ coefficient: coefficient.mul(t.coefficient), integral: t.integral });
+        if (t.deleted.length) irTerms++;
+      }
+      return null;
+    };
+    const failMain = addPiece(Series.ONE, main.integral, 'the graph');
+    if (failMain) return { ok: false, reason: failMain };
     for (const adm of a.admissible) {
       const comps = adm.components.map((i) => a.subgraphs[i]!);
       let coefficient = Series.ONE;
@@ -131,9 +153,8 @@ export class CountertermEngine {
       const { graph: q, vertexMap } = contractParts(bg.graph, parts);
       const routedQ = routedIntegral(bindGraph(q, this.theory), vertexMap[r.u]!, vertexMap[r.v]!);
       if (!routedQ.ok) return { ok: false, reason: `${where}: ${routedQ.reason}` };
-      const irQ = infraredDivergence(routedQ.integral, this.theory.dimension);
-      if (irQ) return { ok: false, reason: `${where}: the cograph after contracting lines ${comps.map((c) => c.edgeList.map((e) => e + 1).join(',')).join(' | ')} is infrared divergent` };
-      pieces.push({ coefficient, integral: routedQ.integral });
+      const failQ = addPiece(coefficient, routedQ.integral, `the cograph after contracting lines ${comps.map((c) => c.edgeList.map((e) => e + 1).join(',')).join(' | ')}`);
+      if (failQ) return { ok: false, reason: failQ };
     }
     const terms: ScalingTerm[] = [];
     const before = { ...this.evaluator.log };
@@ -150,7 +171,8 @@ export class CountertermEngine {
     }
     const log = this.evaluator.log;
     const steps = `${log.bubbles - before.bubbles} bubble(s), ${log.triangles - before.triangles} triangle rule(s), ${log.factorizations - before.factorizations} factorization(s)`;
-    return { ok: true, terms, method: `${where}; ${pieces.length} term(s) of R̄; ${steps} (new integrals only)` };
+    const rs = irTerms ? `; R*: ${irTerms} infrared counterterm term(s)` : '';
+    return { ok: true, terms, method: `${where}; ${pieces.length} term(s) of R̄${rs}; ${steps} (new integrals only)` };
   }
 }
 

@@ -1,3 +1,4 @@
+import { LimitError } from '../errors.ts';
 import type { PropIntegral } from '../integrals/prop-integral.ts';
 
 /** A soft region that diverges: the lines that go soft and its infrared degree. */
@@ -18,8 +19,14 @@ export interface InfraredDivergence {
  * (smallest regions first), or null when the integral is infrared safe.
  */
 export function infraredDivergence(I: PropIntegral, D0: number): InfraredDivergence | null {
+  return infraredRegions(I, D0, true)[0] ?? null;
+}
+
+/** Every divergent soft region (or only the first, smallest ones first, with `firstOnly`). */
+export function infraredRegions(I: PropIntegral, D0: number, firstOnly = false): InfraredDivergence[] {
   const E = I.lines.length;
-  if (E > 24) return null; // beyond what counting by subsets can do; callers limit sizes before
+  if (E > 20) throw new LimitError('infrared power counting', 'maxSoftRegionLines', 20, `${E} lines`, 'the graph is too large for counting soft regions by subsets');
+  const found: InfraredDivergence[] = [];
   const masks = [...Array(1 << E).keys()].slice(1).sort((x, y) => popcount(x) - popcount(y));
   for (const S of masks) {
     const parent = Array.from({ length: I.vertexCount }, (_, i) => i);
@@ -53,9 +60,12 @@ export function infraredDivergence(I: PropIntegral, D0: number): InfraredDiverge
     const comps = new Set([...touched].map(f2)).size;
     const loops = soft - touched.size + comps;
     const degree = D0 * loops - weight;
-    if (degree <= 0) return { softLines: [...Array(E).keys()].filter((k) => S & (1 << k)), degree };
+    if (degree <= 0) {
+      found.push({ softLines: [...Array(E).keys()].filter((k) => S & (1 << k)), degree });
+      if (firstOnly) return found;
+    }
   }
-  return null;
+  return found;
 }
 
 function popcount(x: number): number {

@@ -54,12 +54,6 @@ describe('hand-derivable MS-bar counterterms (common practice)', () => {
     expect(text).toBe('(-2*zeta(3))*eps^-1');
     expect(r.ok && r.detail.routingsCompared).toBe(2);
   });
-  it('the box with a doubled diagonal is not evaluable without R*, for the stated reason', () => {
-    const t = builtinTheory('phi4');
-    const r = new CountertermEngine(t, schemeOf('msbar')).counterterm(bindGraph(parseNotation('1-3 1-4 2-3 2-4 3-4 3-4 / 1 1 2 2'), t));
-    expect(r.ok).toBe(false);
-    expect(!r.ok && r.reason).toMatch(/0\+1eps/);
-  });
 });
 
 describe('schemes (common practice; e.g. "Renormalization", Cambridge 1984)', () => {
