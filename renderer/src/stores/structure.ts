@@ -41,6 +41,8 @@ export interface CanvasMarks {
 }
 
 export const FOREST_PAGE = 10;
+/** Above this many lines the structure is computed on request only (the editor stays responsive while drawing large graphs). */
+export const AUTO_STRUCTURE_MAX_EDGES = 40;
 const SUB = '₀₁₂₃₄₅₆₇₈₉';
 /** γ with a subscript, for plain text (the canvas): γ₁₂. */
 export const gammaName = (index: number): string => `γ${String(index + 1).replace(/\d/g, (d) => SUB[Number(d)]!)}`;
@@ -91,9 +93,15 @@ export const useStructureStore = defineStore('structure', () => {
     }
   }
 
+  /** The graph is too large to analyse on every edit; `analyse()` still does it on request. */
+  const deferred = ref(false);
+
   async function analyse(): Promise<void> {
     const r = request.value;
+    // A job still running for an older graph is stopped, so edits never queue up behind it.
+    if (status.value === 'running') runner.cancel();
     const mine = ++ticket;
+    deferred.value = false;
     result.value = null;
     pages.value = new Map();
     pending.clear();
@@ -138,6 +146,16 @@ export const useStructureStore = defineStore('structure', () => {
       // A newly selected graph at once; edits after a short pause.
       const switched = doc.activeId !== lastGraphId;
       lastGraphId = doc.activeId;
+      if (k && (request.value?.graph.edges.length ?? 0) > AUTO_STRUCTURE_MAX_EDGES) {
+        if (status.value === 'running') runner.cancel();
+        ticket++;
+        result.value = null;
+        key.value = null;
+        status.value = 'idle';
+        deferred.value = true;
+        return;
+      }
+      deferred.value = false;
       if (switched || !k) void analyse();
       else timer = setTimeout(() => void analyse(), 80);
     },
@@ -315,7 +333,7 @@ export const useStructureStore = defineStore('structure', () => {
   });
 
   return {
-    tab, status, stage, error, key, result, current, request, forestMode, forestIndex, forestTotal, pages, pageError, currentForest,
+    tab, status, stage, error, key, deferred, result, current, request, forestMode, forestIndex, forestTotal, pages, pageError, currentForest,
     focus, hover, marks, latexSource, latex, latexError, latexPreview, fillMs,
     analyse, cancel, goToForest, nextForest, prevForest, setForestMode, ensurePage, setLatexSource, loadLatex, texDocument,
   };
