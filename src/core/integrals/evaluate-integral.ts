@@ -120,7 +120,7 @@ export class IntegralEvaluator {
           (k) => this.bubbleFactor(a.index, b.index, k),
           (k) => this.evaluate(rest, k),
           order,
-          2 * L,
+          2, // a G-function has at most two poles
         );
       }
     }
@@ -129,7 +129,7 @@ export class IntegralEvaluator {
     if (cut?.kind === 'scaleless') return Series.ZERO;
     if (cut?.kind === 'factor') {
       this.log.factorizations++;
-      return this.product((k) => this.evaluate(cut.first, k), (k) => this.evaluate(cut.second, k), order, 2 * L);
+      return this.product((k) => this.evaluate(cut.first, k), (k) => this.evaluate(cut.second, k), order, 2 * loopsOf(cut.first));
     }
     // 3. The triangle rule on the triangle with the smallest lowered indices.
     const triangles = findTriangles(I);
@@ -157,12 +157,12 @@ export class IntegralEvaluator {
         return sum;
       },
       order,
-      2 * L + 1,
+      1, // 1/(D − 2α0 − α1 − α2) has at most a simple pole
     );
   }
 
   /**
-   * a·b exact through ε^order: b is asked for first with room for a's poles (a's valuation ≥ −bound),
+   * a·b exact through ε^order: b is asked for first with room for a's poles (`bound` ≥ −valuation of a),
    * then a for what b's valuation leaves; repeated with more room until the product is precise enough.
    */
   private product(fa: (k: number) => Series, fb: (k: number) => Series, order: number, bound: number): Series {
