@@ -14,6 +14,8 @@ import type { Scheme } from '../schemes/scheme.ts';
 import { neverCancel, type CancelToken } from '../util/cancel.ts';
 import { infraredDivergence } from './infrared-safety.ts';
 import { infraredSubtractions } from './infrared-rstar.ts';
+import { glueAndCut } from './glue-and-cut.ts';
+import { loopNumber } from '../graph/connectivity.ts';
 import { atReferencePoint, isLocal, logCoefficient, type ScalingTerm } from './momentum-series.ts';
 import { routedIntegral } from './routed-integral.ts';
 import { choosePairs, type Routing } from './routings.ts';
@@ -78,6 +80,7 @@ export class CountertermEngine {
   private compute(a: GraphAnalysis): CountertermValue {
     this.cancel.throwIfCancelled();
     if (!a.divergent) return { ok: true, value: Series.ZERO, detail: { routing: null, routingsCompared: 0, routingsAgree: true, method: 'superficially convergent: no counterterm', subtracted: [], local: true } };
+    const bg = a.bound;
     const pairs = choosePairs(a);
     if (!pairs.ok) return { ok: false, reason: pairs.reason };
     if (pairs.pairs.length === 0) {
@@ -101,15 +104,23 @@ export class CountertermEngine {
         found.push({ routing: r, value: K.neg(), terms: tried.terms, local: isLocal(tried.terms, a.bound.graph.edges.length), method: tried.method });
       }
     }
+    // Primitive graphs: glue-and-cut gives the counterterm from a finite integral one loop lower —
+    // the value when no routing works, and a second method when fewer than `want` routings did.
+    const glued = a.subgraphs.length === 0 && found.length < want ? glueAndCut(a, this.evaluator, this.theory.dimension) : null;
     if (found.length === 0) {
-      return { ok: false, reason: `no routing of the external momentum is both infrared safe and evaluable; ${summarize(reasons)}` };
+      if (glued?.ok) {
+        const name = (e: number) => `${bg.graph.vertices[bg.graph.edges[e]!.a]!.name}-${bg.graph.vertices[bg.graph.edges[e]!.b]!.name}`;
+        return { ok: true, value: glued.value, detail: { routing: null, routingsCompared: 1, routingsAgree: true, method: `glue-and-cut: the period from the finite integral with line ${glued.line + 1} (${name(glued.line)}) cut`, subtracted: [{ loops: loopNumber(bg.graph), value: glued.value.neg() }], local: true } };
+      }
+      return { ok: false, reason: `no routing of the external momentum is both infrared safe and evaluable; ${summarize(reasons)}${glued && !glued.ok ? `; glue-and-cut: ${glued.reason}` : ''}` };
     }
     const first = found[0]!;
-    const agree = found.every((f) => seriesEqual(f.value, first.value));
+    const values = [...found.map((f) => f.value), ...(glued?.ok ? [glued.value] : [])];
+    const agree = values.every((v) => seriesEqual(v, first.value));
     return {
       ok: true,
       value: first.value,
-      detail: { routing: first.routing, routingsCompared: found.length, routingsAgree: agree, method: first.method, subtracted: first.terms, local: first.local },
+      detail: { routing: first.routing, routingsCompared: values.length, routingsAgree: agree, method: first.method + (glued?.ok ? '; cross-checked by glue-and-cut' : ''), subtracted: first.terms, local: first.local },
     };
   }
 
