@@ -45,3 +45,21 @@ describe('coppice counterterm --scheme', () => {
     expect(r.out).toMatch(/finite: pass/);
   });
 });
+
+describe('values supplied by hand', () => {
+  it('an approximate subgraph counterterm flows through the subtraction with its error, checks consistent within errors', async () => {
+    const j = JSON.parse((await cli('counterterm', '--theory', 'phi4', '--scheme', 'msbar', '--graph', '1-2 1-2 1-3 2-3 / 1 2 3 3', '--supply', '1-2 1-2 / 1 1 2 2=-1.0001(2)*eps^-1', '--json')).out);
+    expect(j.counterterm['-2']).toMatch(/^0\.500/);
+    expect(j.counterterm['-2']).toMatch(/\(\d+\)$/);
+    expect(j.finite).toBe(true);
+  });
+  it('a wrong exact value is caught by the checks (exit 1)', async () => {
+    const r = await cli('counterterm', '--theory', 'phi4', '--scheme', 'msbar', '--graph', '1-2 1-2 1-3 2-3 / 1 2 3 3', '--supply', '1-2 1-2 / 1 1 2 2=-2*eps^-1', '--json');
+    expect(r.code).toBe(1);
+    const j = JSON.parse(r.out);
+    expect(j.finite === false || j.local === false || j.rgConsistent === false).toBe(true);
+  });
+  it('malformed --supply is bad input', async () => {
+    expect((await cli('counterterm', '--theory', 'phi4', '--graph', '1-2 1-2 / 1 1 2 2', '--supply', 'nonsense')).code).toBe(2);
+  });
+});

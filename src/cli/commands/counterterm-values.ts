@@ -5,7 +5,9 @@ import { CountertermEngine, renormalizedValue } from '../../core/renorm/countert
 import { checkRgPoles } from '../../core/renorm/rg-pole-check.ts';
 import { parseScheme } from '../../core/schemes/scheme.ts';
 import { bindGraph } from '../../core/theory/bind-graph.ts';
-import { flag, hasFlag, intFlag, type ParsedArgs } from '../args.ts';
+import { flag, flagAll, hasFlag, intFlag, type ParsedArgs } from '../args.ts';
+import { parseNotation } from '../../core/graph/notation-parse.ts';
+import { expandExpression } from '../../core/algebra/expand-expression.ts';
 import { EXIT, type CliIO } from '../command.ts';
 import { readGraph, resolveTheory } from '../inputs.ts';
 import { momCounterterm } from '../../core/renorm/mom-engine.ts';
@@ -43,6 +45,12 @@ export function runValues(args: ParsedArgs, io: CliIO): number {
     }
   } else {
     const engine = new CountertermEngine(theory, scheme, { cancel: io.cancel, compareRoutings: intFlag(args, 'compare-routings', 2) });
+    for (const spec of flagAll(args, 'supply')) {
+      const eq = spec.lastIndexOf('=');
+      if (eq <= 0) throw new InputError(`--supply needs "<graph notation>=<expression>", got "${spec}"`, undefined, 'e.g. --supply "1-3 1-4 2-3 2-4 3-4 3-4 / 1 1 2 2=-1/3*eps^-3 + 2/3*eps^-2 - 1/3*eps^-1"');
+      const g = bindGraph(parseNotation(spec.slice(0, eq).trim(), 'graph notation in --supply'), theory);
+      engine.supplyCounterterm(g, expandExpression(spec.slice(eq + 1), -1));
+    }
     const ct = engine.counterterm(bg);
     if (!ct.ok) report = { scheme: scheme.name, evaluable: false, reason: ct.reason };
     else {

@@ -27,13 +27,15 @@ with a symbolic renormalization map R, unfolded into one term per forest (BPHZ f
 and the marked counterterm diagrams of renormalized perturbation theory with their symmetry factors.
 
   --max-forest-terms   largest number of unfolded terms to list (default 2000; the tree is always given)
+  --supply "<graph>=<expression>"   the counterterm of a graph class given by hand (exact, or approximate
+                       like 1.2345(6)*eps^-1); used wherever that class appears; repeatable
 `;
 
 export const countertermCommand: Command = {
   name: 'counterterm',
   summary: 'counterterm of a graph: formula tree and forest terms (--symbolic)',
   usage,
-  flags: { booleans: ['json', 'latex', 'symbolic'], values: ['theory', 'graph', 'max-forest-terms', 'scheme', 'compare-routings'] },
+  flags: { booleans: ['json', 'latex', 'symbolic'], values: ['theory', 'graph', 'max-forest-terms', 'scheme', 'compare-routings', 'supply'] },
   run(args, io) {
     if (!hasFlag(args, 'symbolic')) return runValues(args, io);
     const theory = resolveTheory(flag(args, 'theory'), io);

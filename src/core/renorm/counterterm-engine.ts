@@ -18,6 +18,7 @@ import { glueAndCut } from './glue-and-cut.ts';
 import { loopNumber } from '../graph/connectivity.ts';
 import { atReferencePoint, isLocal, logCoefficient, type ScalingTerm } from './momentum-series.ts';
 import { routedIntegral } from './routed-integral.ts';
+import { polesNegligible, seriesNegligible } from './negligible.ts';
 import { choosePairs, type Routing } from './routings.ts';
 
 /** The counterterm of one graph class, or why it has none that can be computed. */
@@ -66,6 +67,24 @@ export class CountertermEngine {
     this.evaluator = new IntegralEvaluator({ D0: theory.dimension, loopFactor: (k) => scheme.loopFactor(theory.dimension, k), measure: scheme.measure(theory.dimension), cancel: this.cancel });
     if (!scheme.minimal) throw new Error('CountertermEngine handles the minimal schemes; use the momentum-subtraction engine for mom');
   }
+
+  /**
+   * Supplies the counterterm of a graph class by hand (exact, or with approximate coefficients that
+   * carry their error): it is used wherever that class appears — as the graph itself, or as a
+   * subgraph in the subtractions of larger graphs and in Z-factors.
+   */
+  supplyCounterterm(g: BoundGraph, value: Series, note = 'value supplied by the user'): void {
+    const key = this.algebra.classOf(g);
+    this.memo.set(key, { ok: true, value, detail: { routing: null, routingsCompared: 0, routingsAgree: true, method: note, subtracted: [{ loops: 0, value: value.neg() }], local: true } });
+    this.supplied.add(key);
+  }
+
+  /** Whether a class's counterterm was supplied by hand rather than computed. */
+  isSupplied(g: BoundGraph): boolean {
+    return this.supplied.has(this.algebra.classOf(g));
+  }
+
+  private readonly supplied = new Set<string>();
 
   /** S_R of a graph (by class). */
   counterterm(g: BoundGraph): CountertermValue {
@@ -188,8 +207,7 @@ export class CountertermEngine {
 }
 
 function seriesEqual(x: Series, y: Series): boolean {
-  const d = x.sub(y);
-  return d.coeffs.every((c) => c.isZero());
+  return seriesNegligible(x.sub(y));
 }
 
 function summarize(reasons: string[]): string {
@@ -204,7 +222,7 @@ export function renormalizedValue(terms: readonly ScalingTerm[], counterterm: Se
   for (let j = 0; j <= maxJ; j++) {
     let c = logCoefficient(terms, j);
     if (j === 0) c = c.add(counterterm);
-    if (!polePart(c).isZero()) finite = false;
+    if (!polesNegligible(c)) finite = false;
     out.push(c.order >= 0 ? c.coeff(0) : Poly.ZERO);
   }
   while (out.length > 1 && out[out.length - 1]!.isZero()) out.pop();

@@ -1,5 +1,4 @@
 import { Poly } from '../algebra/polynomial.ts';
-import { polePart } from '../algebra/pole-part.ts';
 import { Rational } from '../algebra/rational.ts';
 import { Series } from '../algebra/series.ts';
 import { contractParts } from '../graph/contract.ts';
@@ -17,6 +16,7 @@ import { neverCancel, type CancelToken } from '../util/cancel.ts';
 import { infraredDivergence } from './infrared-safety.ts';
 import { logCoefficient, type ScalingTerm } from './momentum-series.ts';
 import { routedIntegral } from './routed-integral.ts';
+import { polesNegligible } from './negligible.ts';
 import type { Routing } from './routings.ts';
 
 export type MomResult =
@@ -103,7 +103,7 @@ export function momCounterterm(theory: Theory, bg: BoundGraph, opts: { cancel?: 
     for (let j = 0; j <= g.edges.length; j++) {
       let c = logCoefficient(ts, j);
       if (j === 0) c = c.add(value);
-      if (!polePart(c).isZero()) finite = false;
+      if (!polesNegligible(c)) finite = false;
       ren.push(c.order >= 0 ? c.coeff(0) : Poly.ZERO);
     }
     while (ren.length > 1 && ren[ren.length - 1]!.isZero()) ren.pop();

@@ -1,7 +1,7 @@
 import { Poly } from '../algebra/polynomial.ts';
 import { Rational } from '../algebra/rational.ts';
 import { Series } from '../algebra/series.ts';
-import { polePart } from '../algebra/pole-part.ts';
+import { polesNegligible } from './negligible.ts';
 
 /**
  * A value Σ_i c_i(ε) (p²/μ²)^{−l_i ε}: every term of a subtracted graph scales with its own
@@ -33,6 +33,6 @@ export function logCoefficient(terms: readonly ScalingTerm[], j: number): Series
 
 /** Whether the pole part of every L^j coefficient with j ≥ 1 vanishes (locality), through j = maxJ. */
 export function isLocal(terms: readonly ScalingTerm[], maxJ: number): boolean {
-  for (let j = 1; j <= maxJ; j++) if (!polePart(logCoefficient(terms, j)).isZero()) return false;
+  for (let j = 1; j <= maxJ; j++) if (!polesNegligible(logCoefficient(terms, j))) return false;
   return true;
 }
