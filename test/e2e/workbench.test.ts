@@ -118,7 +118,7 @@ describe.skipIf(!haveChromium)('the structure workbench in Chromium', () => {
       await expect.poll(() => bench.getAttribute('data-filled-ms'), { timeout: 15_000 }).not.toBe('');
       const t0 = Date.now();
       await page.getByTestId('graph-item').last().click();
-      await expect.poll(() => bench.getAttribute('data-filled-ms'), { timeout: 15_000, intervals: [5] }).not.toBe('');
+      await expect.poll(() => bench.getAttribute('data-filled-ms'), { timeout: 15_000, interval: 5 }).not.toBe('');
       wall.push(Date.now() - t0);
       figures.push(Number(await bench.getAttribute('data-filled-ms')));
     }
