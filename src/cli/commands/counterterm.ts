@@ -33,7 +33,7 @@ and the marked counterterm diagrams of renormalized perturbation theory with the
 
 export const countertermCommand: Command = {
   name: 'counterterm',
-  summary: 'counterterm of a graph: formula tree and forest terms (--symbolic)',
+  summary: 'counterterm of a graph: exact value in a scheme, or the formula tree and forest terms (--symbolic)',
   usage,
   flags: { booleans: ['json', 'latex', 'symbolic'], values: ['theory', 'graph', 'max-forest-terms', 'scheme', 'compare-routings', 'supply'] },
   run(args, io) {
