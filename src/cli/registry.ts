@@ -7,6 +7,7 @@ import { periodCommand } from './commands/period.ts';
 import { coproductCommand } from './commands/coproduct.ts';
 import { countertermCommand } from './commands/counterterm.ts';
 import { generateCommand } from './commands/generate.ts';
+import { rgCommand } from './commands/rg.ts';
 
 /** Every `coppice` verb. Add a command by writing `commands/<verb>.ts` and listing it here. */
-export const commands: readonly Command[] = [inspectCommand, expandCommand, periodCommand, coproductCommand, countertermCommand, isoCommand, generateCommand];
+export const commands: readonly Command[] = [inspectCommand, expandCommand, periodCommand, coproductCommand, countertermCommand, isoCommand, generateCommand, rgCommand];

@@ -12,3 +12,4 @@ export * from './canon/index.ts';
 export * from './hopf/index.ts';
 export * from './export/index.ts';
 export * from './generate/index.ts';
+export * from './rg/index.ts';
