@@ -32,7 +32,7 @@ export async function runCli(argv: readonly string[], io: CliIO): Promise<number
   }
   const cmd = commands.find((c) => c.name === verb);
   if (!cmd) {
-    io.err(`coppice: unknown command "${verb}"; known commands: ${commands.map((c) => c.name).join(', ')}\n`);
+    io.err(`coppice: unknown command ${JSON.stringify(verb)}; known commands: ${commands.map((c) => c.name).join(', ')}\n`);
     return EXIT.badInput;
   }
   if (rest.includes('--help') || rest.includes('-h')) {

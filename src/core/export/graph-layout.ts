@@ -38,6 +38,7 @@ const lerp = (a: Point, b: Point, t: number) => pt(a.x + (b.x - a.x) * t, a.y + 
 
 function positions(g: Graph): Point[] {
   const n = g.vertices.length;
+  if (n === 0) return []; // the empty graph (the unit 1 of the Hopf algebra)
   if (n === 1) return [pt(0, 0)];
   if (n === 2) return [pt(-EDGE / 2, 0), pt(EDGE / 2, 0)];
   const adj = g.vertices.map(() => new Set<number>());
