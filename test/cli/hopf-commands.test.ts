@@ -33,10 +33,10 @@ describe('coppice counterterm --symbolic', () => {
     expect(ct.tree.nodes[ct.tree.root].name).toBe('G');
     expect(ct.countertermDiagrams.reduce((s: number, d: { multiplicity: number }) => s + d.multiplicity, 0)).toBe(4);
   });
-  it('without --symbolic says what is missing (exit 2)', async () => {
-    const r = await cli('counterterm', '--theory', 'phi4', '--graph', '1-2 1-2 / 1 1 2 2');
-    expect(r.code).toBe(2);
-    expect(r.err).toMatch(/--symbolic/);
+  it('without --symbolic gives the value (MS-bar by default)', async () => {
+    const r = await cli('counterterm', '--theory', 'phi4', '--graph', '1-2 1-2 / 1 1 2 2', '--json');
+    expect(r.code).toBe(0);
+    expect(JSON.parse(r.out)).toMatchObject({ scheme: 'msbar', counterterm: { '-1': '-1' } });
   });
   it('human output shows the tree and the forest terms', async () => {
     const r = await cli('counterterm', '--symbolic', '--theory', 'qed', '--graph', '1>4 4>5 5>2 4-5 2>3 1-3 / >1 2 3>');
