@@ -32,7 +32,9 @@ exact evaluator.
               "theory", "scheme", "loops", "knownThrough", "incomplete", "reasons", "checks"}
              monomials g, g^2, ...; the term -2 eps g of beta is the monomial "eps*g" with
              value "-2"; values are coefficients at eps^0 in canonical text; zero coefficients
-             are omitted ("knownThrough" says how far each series is known)
+             are omitted ("knownThrough" says how far each series is known); "graphs"
+             counts the graph classes evaluated (four-point, two-point, and two-point with
+             the phi^2 insertion, whose notation marks the insertion by a sigma leg)
 
 Exit 0 when the RG pole relations hold, 1 when a check failed, 130 on Ctrl-C.
 `;
