@@ -8,4 +8,6 @@ export interface BenchCase {
   targetMs?: number;
   /** Items one run handles; times are reported per item (e.g. per graph). */
   perRun?: number;
+  /** Minutes rather than seconds: run only with `npm run bench -- --heavy`. */
+  heavy?: boolean;
 }

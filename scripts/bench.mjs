@@ -6,6 +6,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 
 const update = process.argv.includes('--update');
+const heavy = process.argv.includes('--heavy');
 const filter = process.argv.find((a) => a.startsWith('--only='))?.slice(7);
 const caseFiles = readdirSync('bench/cases').filter((f) => f.endsWith('.ts')).sort();
 mkdirSync('.bench-results', { recursive: true });
@@ -23,6 +24,10 @@ for (const file of caseFiles) {
   const { cases } = await import(pathToFileURL(out).href);
   console.log(`\n${file}`);
   for (const c of cases) {
+    if (c.heavy && !heavy) {
+      console.log(`  ${c.name.padEnd(64)}   (heavy: run with --heavy)`);
+      continue;
+    }
     c.run(); // warm-up
     const samples = [];
     const t0 = performance.now();
