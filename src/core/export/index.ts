@@ -16,3 +16,4 @@ export * from './write-coproduct.ts';
 export * from './write-counterterm.ts';
 export * from './write-document.ts';
 export * from './to-latex.ts';
+export * from './write-values.ts';

@@ -10,9 +10,14 @@ import { bindGraph } from '../theory/bind-graph.ts';
 import { parseTheory } from '../theory/parse-theory.ts';
 import type { Theory } from '../theory/types.ts';
 import { neverCancel, type CancelToken } from '../util/cancel.ts';
+import { runRg, type RgJob, type RgResult } from './rg-job.ts';
 import { runForestPage, runLatex, runStructure, type ForestPageJob, type ForestPageResult, type LatexJob, type LatexResult, type StructureJob, type StructureResult } from './structure-job.ts';
 
+import { runPeriod, runValues, type PeriodJob, type PeriodResult, type ValuesJob, type ValuesResult } from './values-job.ts';
+
 export type * from './structure-job.ts';
+export type * from './values-job.ts';
+export type * from './rg-job.ts';
 
 /** Power counting and divergent subgraphs of one graph (what `coppice inspect` reports). */
 export interface InspectJob {
@@ -21,7 +26,7 @@ export interface InspectJob {
   readonly notation: string;
 }
 
-export type JobRequest = InspectJob | StructureJob | ForestPageJob | LatexJob;
+export type JobRequest = InspectJob | StructureJob | ForestPageJob | LatexJob | ValuesJob | PeriodJob | RgJob;
 
 /** `coppice inspect --json`'s stable shape (counts beyond 2^53 − 1 as decimal strings). */
 export interface InspectSummary {
@@ -44,7 +49,7 @@ export interface InspectResult {
   readonly summary: InspectSummary;
 }
 
-export type JobResult = InspectResult | StructureResult | ForestPageResult | LatexResult;
+export type JobResult = InspectResult | StructureResult | ForestPageResult | LatexResult | ValuesResult | PeriodResult | RgResult;
 
 export type JobOutcome =
   | { readonly ok: true; readonly result: JobResult }
@@ -81,6 +86,12 @@ export function runJob(req: JobRequest, ctx: JobContext = {}): JobOutcome {
         return { ok: true, result: runForestPage(req, cancel) };
       case 'latex':
         return { ok: true, result: runLatex(req) };
+      case 'values':
+        return { ok: true, result: runValues(req, cancel, (fraction, stage) => ctx.progress?.({ fraction, stage })) };
+      case 'period':
+        return { ok: true, result: runPeriod(req, cancel, (fraction, stage) => ctx.progress?.({ fraction, stage })) };
+      case 'rg':
+        return { ok: true, result: runRg(req, cancel, (fraction, stage) => ctx.progress?.({ fraction, stage })) };
     }
   } catch (e) {
     if (e instanceof CoppiceError) return { ok: false, error: e.hint ? { name: e.name, message: e.message, hint: e.hint } : { name: e.name, message: e.message } };
