@@ -3,17 +3,14 @@
  * flags, real and broken values, and junk. The contract (DESIGN §10): exit code 0, 1, 2 or 3
  * (never 70, "internal error"); when non-zero, exactly one line on stderr and no stack trace.
  */
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
-import { runCli } from '../../src/cli/run.ts';
 import { commands } from '../../src/cli/registry.ts';
-import { InputError } from '../../src/core/errors.ts';
 import { phi4 } from '../../src/core/theory/builtin/phi4.ts';
-import { cancelSource } from '../../src/core/util/cancel.ts';
-import { readFileSync, rmSync } from 'node:fs';
+import { expectContract, runInProcess } from './cli-helpers.ts';
 import { params, RUNS } from './fuzz-helpers.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'coppice-fuzz-cli-'));
@@ -31,42 +28,6 @@ const files = {
   junk: file('junk.txt', '\u0000\uFFFD{{{'),
   missing: join(dir, 'missing.json'),
 };
-
-export interface CliResult {
-  code: number;
-  out: string;
-  err: string;
-}
-
-/** runCli in-process, collecting its streams. */
-export async function runInProcess(argv: readonly string[]): Promise<CliResult> {
-  let out = '';
-  let err = '';
-  const code = await runCli(argv, {
-    out: (t) => (out += t),
-    err: (t) => (err += t),
-    readFile: (p) => {
-      try {
-        return readFileSync(p, 'utf8');
-      } catch (e) {
-        throw new InputError(`cannot read file "${p}": ${(e as NodeJS.ErrnoException).code ?? String(e)}`);
-      }
-    },
-    cancel: cancelSource(),
-  });
-  return { code, out, err };
-}
-
-/** The DESIGN §10 stream contract for one finished command. */
-export function expectContract(argv: readonly string[], r: CliResult): void {
-  const where = `argv ${JSON.stringify(argv)} → ${r.code}, stderr ${JSON.stringify(r.err.slice(0, 400))}`;
-  expect([0, 1, 2, 3], where).toContain(r.code);
-  expect(r.err, where).not.toMatch(/internal error|\n\s+at .+[:(]\d+|Error: /);
-  if (r.code >= 2) {
-    expect(r.err.endsWith('\n') && r.err.indexOf('\n') === r.err.length - 1, `one line on stderr: ${where}`).toBe(true);
-    expect(r.err, where).toMatch(/^coppice/);
-  }
-}
 
 const graphs = [
   '1-2 1-2 / 1 1 2 2', '1-2 1-2 1-2 / 1 2', '1-2 1-3 1-4 2-3 2-4 3-4 / 1 2 3 4', '1-2 1-2 2-3 3-1 3-1 / 1 2 2 3', '1-1 / 1 1', '/',
