@@ -1,8 +1,9 @@
 import { InputError } from '../errors.ts';
 import { printNotation } from '../graph/notation-print.ts';
-import type { Edge, Graph, Leg, Vertex } from '../graph/types.ts';
+import type { Graph, Leg, Vertex } from '../graph/types.ts';
 import { colouredStructure, legCode, type LegMode } from './coloured-structure.ts';
 import { searchCanonical, type SearchOptions } from './search-tree.ts';
+import { compareEdges, placeEdge } from './edge-order.ts';
 
 export interface CanonOptions extends SearchOptions {
   /** `labelled` (default): leg i must go to leg i. `unlabelled`: legs of one field and direction are interchangeable. */
@@ -29,27 +30,6 @@ export interface CanonicalForm {
   readonly generators: readonly (readonly number[])[];
 }
 
-const fieldKey = (f: string | null) => f ?? '';
-
-/** Writes edge e with canonical vertex numbers: undirected ends low-high, arrows tail>head. */
-function placeEdge(e: Edge, pos: readonly number[]): Edge {
-  const a = pos[e.a]!;
-  const b = pos[e.b]!;
-  if (e.oriented) return { a, b, field: e.field, oriented: true };
-  return { a: Math.min(a, b), b: Math.max(a, b), field: e.field, oriented: false };
-}
-
-function compareEdges(x: Edge, y: Edge): number {
-  const lo = Math.min(x.a, x.b) - Math.min(y.a, y.b);
-  if (lo) return lo;
-  const hi = Math.max(x.a, x.b) - Math.max(y.a, y.b);
-  if (hi) return hi;
-  const fx = fieldKey(x.field);
-  const fy = fieldKey(y.field);
-  if (fx !== fy) return fx < fy ? -1 : 1;
-  const code = (e: Edge) => (!e.oriented ? 0 : e.a <= e.b ? 1 : 2);
-  return code(x) - code(y);
-}
 
 /**
  * The canonical form of a multigraph with typed and oriented edges, self-loops, external

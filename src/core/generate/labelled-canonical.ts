@@ -1,3 +1,4 @@
+import { compareEdges, placeEdge } from '../canon/edge-order.ts';
 import { hashId, type ColouredStructure } from '../canon/coloured-structure.ts';
 import { searchCanonical, type SearchOptions } from '../canon/search-tree.ts';
 import { printNotation } from '../graph/notation-print.ts';
@@ -111,22 +112,3 @@ export class LabelledCanonicalizer {
   }
 }
 
-/** As canonical-form.ts: undirected ends low-high, arrows tail>head. */
-function placeEdge(e: Edge, pos: readonly number[]): Edge {
-  const a = pos[e.a]!;
-  const b = pos[e.b]!;
-  if (e.oriented) return { a, b, field: e.field, oriented: true };
-  return { a: Math.min(a, b), b: Math.max(a, b), field: e.field, oriented: false };
-}
-
-function compareEdges(x: Edge, y: Edge): number {
-  const lo = Math.min(x.a, x.b) - Math.min(y.a, y.b);
-  if (lo) return lo;
-  const hi = Math.max(x.a, x.b) - Math.max(y.a, y.b);
-  if (hi) return hi;
-  const fx = x.field ?? '';
-  const fy = y.field ?? '';
-  if (fx !== fy) return fx < fy ? -1 : 1;
-  const code = (e: Edge) => (!e.oriented ? 0 : e.a <= e.b ? 1 : 2);
-  return code(x) - code(y);
-}
