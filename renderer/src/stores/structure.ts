@@ -14,7 +14,7 @@ import {
 import { useDocumentStore } from './document.ts';
 import { createJobRunner } from './jobs.ts';
 
-export type WorkbenchTab = 'power' | 'subgraphs' | 'forests' | 'coproduct' | 'counterterms' | 'latex';
+export type WorkbenchTab = 'power' | 'subgraphs' | 'forests' | 'coproduct' | 'counterterms' | 'latex' | 'values' | 'theory';
 export const WORKBENCH_TABS: readonly { id: WorkbenchTab; label: string }[] = [
   { id: 'power', label: 'Power counting' },
   { id: 'subgraphs', label: 'Subgraphs' },
@@ -22,6 +22,8 @@ export const WORKBENCH_TABS: readonly { id: WorkbenchTab; label: string }[] = [
   { id: 'coproduct', label: 'Coproduct' },
   { id: 'counterterms', label: 'Counterterms' },
   { id: 'latex', label: 'LaTeX' },
+  { id: 'values', label: 'Values' },
+  { id: 'theory', label: 'Theory run' },
 ];
 
 /** What a panel points at; its subgraphs are marked on the canvas. */

@@ -5,3 +5,5 @@ export * from './tagged-json.ts';
 export * from './project-file.ts';
 export * from './jobs.ts';
 export * from './ipc-contract.ts';
+export * from './values-job.ts';
+export * from './rg-job.ts';

@@ -5,7 +5,9 @@
  * counterterm −P/(Lε). Results are plain data (text, KaTeX-safe TeX, numbers) for the worker
  * boundary.
  */
+import { evaluatePolyApprox } from '../algebra/evaluate-numeric.ts';
 import { expandExpression } from '../algebra/expand-expression.ts';
+import { variableInfo } from '../algebra/variables.ts';
 import { formatPoly, formatSeries } from '../algebra/format-text.ts';
 import { polyToLatex, seriesToLatex } from '../algebra/format-latex.ts';
 import type { Poly } from '../algebra/polynomial.ts';
@@ -63,7 +65,8 @@ export interface SeriesInfo {
   readonly text: string;
   readonly tex: string;
   readonly exact: boolean;
-  readonly terms: readonly { readonly power: number; readonly text: string }[];
+  /** Nonzero coefficients; `value` ± `error` numerically when no free symbol (N) is left. */
+  readonly terms: readonly { readonly power: number; readonly text: string; readonly value?: number; readonly error?: number }[];
 }
 
 export type ValueCheckId = 'finite' | 'local' | 'routings' | 'rg' | 'exp';
@@ -125,9 +128,12 @@ export interface PeriodResult {
 const SCALAR = (t: Theory) => t.fields.every((f) => f.statistics === 'boson' && f.propagatorWeight === 2 && !f.antiparticle);
 
 export function seriesInfo(s: Series, poles = false): SeriesInfo {
-  const terms: { power: number; text: string }[] = [];
+  const terms: { power: number; text: string; value?: number; error?: number }[] = [];
   s.coeffs.forEach((c, i) => {
-    if (!c.isZero()) terms.push({ power: s.val + i, text: formatPoly(c) });
+    if (c.isZero()) return;
+    const free = c.terms().some((t) => t.mono.factors.some((f) => variableInfo(f.name).kind === 'symbol'));
+    const a = free ? null : evaluatePolyApprox(c);
+    terms.push({ power: s.val + i, text: formatPoly(c), ...(a ? { value: a.value, error: a.error } : {}) });
   });
   return { text: formatSeries(s), tex: poles ? polesToLatex(s) : seriesToLatex(s), exact: s.isExact(), terms };
 }
@@ -229,7 +235,7 @@ export function runValues(req: ValuesJob, cancel: CancelToken = neverCancel, pro
   const routing = ct.detail.routing ? ([rep.graph.vertices[ct.detail.routing.u]!.name, rep.graph.vertices[ct.detail.routing.v]!.name] as const) : null;
 
   if (suppliedForGraph) {
-    const why = "the graph's own counterterm was entered by hand: there is no subtracted value to check it against";
+    const why = 'Γ\'s own counterterm was entered by hand: nothing to check it against';
     checks.push(
       { id: 'finite', label: 'finite', status: 'unchecked', detail: why },
       { id: 'local', label: 'local', status: 'unchecked', detail: why },
