@@ -1,8 +1,4 @@
 /** The Values and Theory-run panels: their stores' logic and the panels in happy-dom (jobs in-process; the worker is tested end to end). */
-import { execFileSync } from 'node:child_process';
-import { existsSync, mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { flushPromises, mount } from '@vue/test-utils';
 import { createPinia, setActivePinia } from 'pinia';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
@@ -14,8 +10,7 @@ import { useDocumentStore } from '../../renderer/src/stores/document.ts';
 import { useStructureStore } from '../../renderer/src/stores/structure.ts';
 import { useTheoryRunStore } from '../../renderer/src/stores/theory-run.ts';
 import { periodAgreement, useValuesStore } from '../../renderer/src/stores/values.ts';
-import { runJob, type RgFunctionInfo, type RgResult } from '../../src/core/project/index.ts';
-import { builtinTheory } from '../../src/core/theory/builtin/index.ts';
+import type { RgFunctionInfo, RgResult } from '../../src/core/project/index.ts';
 
 const SUNSET = '1-2 1-2 1-2 / 1 2';
 const CHAIN = '1-2 1-2 2-3 2-3 / 1 1 3 3';
@@ -258,31 +253,5 @@ describe('panels', () => {
     expect(w.findAll('[data-testid=rg-graph]').length).toBe(18);
     expect(w.findAll('.katex-error')).toHaveLength(0);
     w.unmount();
-  });
-});
-
-const havePdflatex = (() => {
-  try {
-    execFileSync('pdflatex', ['--version'], { stdio: 'ignore' });
-    return true;
-  } catch {
-    return false;
-  }
-})();
-
-describe.skipIf(!havePdflatex)('LaTeX export of values and RG functions', () => {
-  it('compiles with pdflatex (the per-graph breakdown with TikZ pictures)', { timeout: 60_000 }, () => {
-    const theory = builtinTheory('phi4');
-    const rg = runJob({ kind: 'rg', theory, loops: 2, scheme: 'msbar', evaluate: true });
-    const values = runJob({ kind: 'values', theory, notation: CHAIN, scheme: 'msbar' });
-    if (!rg.ok || rg.result.kind !== 'rg' || !values.ok || values.result.kind !== 'values') throw new Error('jobs failed');
-    const dir = mkdtempSync(join(tmpdir(), 'coppice-values-tex-'));
-    for (const [name, text] of [['rg', rg.result.latex!], ['values', values.result.latex]] as const) {
-      expect(text).toMatch(/S_R/);
-      writeFileSync(join(dir, `${name}.tex`), text);
-      execFileSync('pdflatex', ['-interaction=nonstopmode', '-halt-on-error', `${name}.tex`], { cwd: dir, stdio: 'pipe', timeout: 50_000 });
-      expect(existsSync(join(dir, `${name}.pdf`))).toBe(true);
-    }
-    expect(rg.result.latex).toMatch(/\\frac\{1\}\{6\}/);
   });
 });
