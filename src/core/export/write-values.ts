@@ -84,7 +84,7 @@ const mark = (s: ValueCheckStatus) => (s === 'pass' ? 'pass' : s === 'fail' ? 'F
 
 export function writeValuesDocument(d: ValuesDocumentInput): string {
   const record: [string, string][] = [
-    ['written by', `Coppice ${d.version ?? 'unknown'}`],
+    ['written by', `Coppice${d.version ? ` ${d.version}` : ''}`],
     ['graph', d.notation],
     ['theory', `${d.theory.name} (${d.theory.title}), D0 = ${d.theory.dimension}`],
     ['scheme', d.scheme.description],
@@ -197,7 +197,7 @@ function zLine(z: RgDocumentInput['z'][number]): string {
 
 export function writeRgDocument(d: RgDocumentInput): string {
   const record: [string, string][] = [
-    ['written by', `Coppice ${d.version ?? 'unknown'}`],
+    ['written by', `Coppice${d.version ? ` ${d.version}` : ''}`],
     ['content', `Z-factors and RG functions through ${d.loops} loop${d.loops === 1 ? '' : 's'}`],
     ['theory', `${d.theory.name} (${d.theory.title}), D0 = ${d.theory.dimension}`],
     ['scheme', d.scheme.description],
@@ -218,7 +218,7 @@ export function writeRgDocument(d: RgDocumentInput): string {
   body.push(d.z.map(zLine).join(' \\\\\n'));
   body.push('\\end{align*}');
   body.push('\\subsection*{Graph by graph}');
-  body.push(`\\noindent Each graph enters its renormalization constant as $Z - 1 \\ni w \\cdot g^{L} \\cdot S_R(\\Gamma)$, with $w = -(\\text{vertex sign})^V (\\text{tree factor})^{k} \\, c_\\Gamma / S$ (${latexText('the zFromGraphs convention above')}).`);
+  body.push(`\\noindent Each graph enters its renormalization constant as $Z - 1 \\ni w \\cdot g^{L} \\cdot S_R(\\Gamma)$, with $w = -(\\text{vertex sign})^V (\\text{tree factor})^{k} \\, c_\\Gamma / S$ (${latexText('see zFromGraphs in the conventions above')}).`);
   body.push('{\\small');
   body.push('\\begin{longtable}{@{}r c c c c c c p{5.6cm}@{}}');
   const head = '\\# & $\\Gamma$ & $Z$ & $1/S$ & $c_\\Gamma$ & $w$ & $g^L$ & $S_R(\\Gamma)$ \\\\ \\hline';
