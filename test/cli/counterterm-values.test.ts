@@ -63,3 +63,27 @@ describe('values supplied by hand', () => {
     expect((await cli('counterterm', '--theory', 'phi4', '--graph', '1-2 1-2 / 1 1 2 2', '--supply', 'nonsense')).code).toBe(2);
   });
 });
+
+import { execFileSync, spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync, existsSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+
+describe('coppice counterterm --scheme --latex', () => {
+  const hasLatex = spawnSync('pdflatex', ['--version']).status === 0;
+  it('writes a document with the counterterm, the renormalized value and the checks', async () => {
+    const r = await cli('counterterm', '--theory', 'phi4', '--scheme', 'msbar', '--graph', '1-2 1-2 1-3 2-3 / 1 2 3 3', '--latex');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/\\documentclass/);
+    expect(r.out).toContain("S_R(\\Gamma) &= \\frac{1}{2}\\,\\varepsilon^{-2} - \\frac{1}{2}\\,\\varepsilon^{-1}");
+    expect(r.out).not.toMatch(/\?/); // every character was written in LaTeX
+  });
+  // Exported LaTeX must compile with a real LaTeX (REFERENCES.md, "LaTeX"; CI installs texlive).
+  it.skipIf(!hasLatex && !process.env.CI)('compiles with pdflatex', async () => {
+    const r = await cli('counterterm', '--theory', 'phi3', '--scheme', 'g', '--graph', '1-2 2-3 3-1 / 1 2 3', '--latex');
+    const dir = mkdtempSync(join(tmpdir(), 'coppice-tex-'));
+    writeFileSync(join(dir, 'v.tex'), r.out);
+    execFileSync('pdflatex', ['-halt-on-error', '-interaction=nonstopmode', 'v.tex'], { cwd: dir, stdio: 'ignore' });
+    expect(existsSync(join(dir, 'v.pdf'))).toBe(true);
+  });
+});

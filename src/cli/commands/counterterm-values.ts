@@ -1,5 +1,10 @@
 import { formatPoly } from '../../core/algebra/format-text.ts';
 import type { Series } from '../../core/algebra/series.ts';
+import type { Poly } from '../../core/algebra/polynomial.ts';
+import { printNotation } from '../../core/graph/notation-print.ts';
+import { atReferencePoint } from '../../core/renorm/momentum-series.ts';
+import { writeValuesDocument, type ValueCheckStatus } from '../../core/export/write-values.ts';
+import pkg from '../../../package.json' with { type: 'json' };
 import { InputError } from '../../core/errors.ts';
 import { CountertermEngine, renormalizedValue } from '../../core/renorm/counterterm-engine.ts';
 import { checkRgPoles } from '../../core/renorm/rg-pole-check.ts';
@@ -24,11 +29,13 @@ export function runValues(args: ParsedArgs, io: CliIO): number {
   const theory = resolveTheory(flag(args, 'theory'), io);
   const scheme = parseScheme(flag(args, 'scheme') ?? 'msbar');
   const bg = bindGraph(readGraph(flag(args, 'graph'), io), theory);
-  if (hasFlag(args, 'latex')) throw new InputError('LaTeX output of counterterm values is not available yet', undefined, 'use --json, or --symbolic --latex for the formula');
   const scalar = theory.fields.every((f) => f.statistics === 'boson' && f.propagatorWeight === 2 && !f.antiparticle);
   const names = (r: { u: number; v: number } | null) => (r ? [bg.graph.vertices[r.u]!.name, bg.graph.vertices[r.v]!.name] : null);
   let report: Record<string, unknown>;
   let failed = false;
+  // What the LaTeX document needs, filled in by whichever path evaluates.
+  let tex: { counterterm: Series | null; subtracted: Series | null; renormalized: Poly[] | null; method: string; checks: { label: string; status: ValueCheckStatus; detail: string }[] } = { counterterm: null, subtracted: null, renormalized: null, method: '', checks: [] };
+  const status = (b: boolean | null | undefined): ValueCheckStatus => (b === true ? 'pass' : b === false ? 'fail' : 'unchecked');
   if (!scalar) {
     report = { scheme: scheme.name, evaluable: false, reason: `theory ${theory.name} has fermion or gauge lines: exact values are available for the scalar theories (phi4, phi4-on, phi3) only; supply values by hand` };
   } else if (!scheme.minimal) {
@@ -36,6 +43,7 @@ export function runValues(args: ParsedArgs, io: CliIO): number {
     if (!r.ok) report = { scheme: scheme.name, evaluable: false, reason: r.reason };
     else {
       failed = !r.finite;
+      tex = { counterterm: r.value, subtracted: r.value.neg(), renormalized: r.renormalized, method: r.method, checks: [{ label: 'finite', status: status(r.finite), detail: 'φ_R has no poles' }, { label: 'exponential in ln(p²/μ²)', status: r.expCheck.checked ? status(r.expCheck.ok) : 'unchecked', detail: r.expCheck.note }] };
       report = {
         scheme: scheme.name, evaluable: true, method: r.method, routing: names(r.routing), routingsCompared: 1,
         counterterm: seriesJSON(r.value, 0), finite: r.finite, local: true, routingsAgree: true,
@@ -61,6 +69,18 @@ export function runValues(args: ParsedArgs, io: CliIO): number {
       const rg = checkRgPoles(engine, a, ct.value);
       const routing = ct.detail.routing ? [rep.graph.vertices[ct.detail.routing.u]!.name, rep.graph.vertices[ct.detail.routing.v]!.name] : null;
       failed = !ren.finite || !ct.detail.local || !ct.detail.routingsAgree || (rg.checked && !rg.consistent);
+      tex = {
+        counterterm: ct.value,
+        subtracted: atReferencePoint(ct.detail.subtracted),
+        renormalized: ren.coefficients,
+        method: ct.detail.method,
+        checks: [
+          { label: 'finite', status: status(ren.finite), detail: 'φ_R = R̄Γ + S_R(Γ) has no poles' },
+          { label: 'local', status: status(ct.detail.local), detail: 'no ln(p²/μ²) in the pole part' },
+          { label: 'routings agree', status: ct.detail.routingsCompared > 1 ? status(ct.detail.routingsAgree) : 'unchecked', detail: `${ct.detail.routingsCompared} compared` },
+          { label: 'RG poles', status: rg.checked ? status(rg.consistent) : 'unchecked', detail: rg.reason ?? 'higher poles from the simple ones' },
+        ],
+      };
       report = {
         scheme: scheme.name, evaluable: true, method: ct.detail.method, routing, routingsCompared: ct.detail.routingsCompared,
         counterterm: seriesJSON(ct.value, -1), finite: ren.finite, local: ct.detail.local, routingsAgree: ct.detail.routingsAgree,
@@ -69,7 +89,25 @@ export function runValues(args: ParsedArgs, io: CliIO): number {
       };
     }
   }
-  if (hasFlag(args, 'json')) io.out(JSON.stringify(report) + '\n');
+  if (hasFlag(args, 'latex')) {
+    io.out(
+      writeValuesDocument({
+        theory,
+        notation: printNotation(bg.graph, { defaultField: theory.defaultField }),
+        graph: bg.graph,
+        scheme: { name: scheme.name, description: scheme.description },
+        method: report.evaluable ? tex.method : String(report.reason),
+        evaluable: report.evaluable === true,
+        counterterm: tex.counterterm,
+        bare: null,
+        subtracted: tex.subtracted,
+        renormalized: tex.renormalized,
+        checks: tex.checks,
+        supplied: flagAll(args, 'supply').map((x) => ({ notation: x.slice(0, x.lastIndexOf('=')).trim(), expression: x.slice(x.lastIndexOf('=') + 1).trim() })),
+        version: pkg.version,
+      }).trimEnd() + '\n',
+    );
+  } else if (hasFlag(args, 'json')) io.out(JSON.stringify(report) + '\n');
   else io.out(humanValues(report, theory.name) + '\n');
   return failed ? EXIT.checkFailed : EXIT.ok;
 }

@@ -36,6 +36,12 @@ export function latexText(s: string): string {
   const chars = [...s.normalize('NFC')];
   for (let i = 0; i < chars.length; i++) {
     const c = chars[i]!;
+    // A Latin letter with a combining macron (R̄, the subtracted value) has no precomposed form.
+    if (/[A-Za-z]/.test(c) && chars[i + 1] === '\u0304') {
+      out += `$\\bar{${c}}$`;
+      i++;
+      continue;
+    }
     if (SPECIAL[c]) out += SPECIAL[c];
     else if (MATH_SYMBOL[c]) {
       const bar = chars[i + 1] === '\u0304';
