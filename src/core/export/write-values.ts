@@ -220,7 +220,8 @@ export function writeRgDocument(d: RgDocumentInput): string {
   body.push('\\subsection*{Graph by graph}');
   body.push(`\\noindent Each graph enters its renormalization constant as $Z - 1 \\ni w \\cdot g^{L} \\cdot S_R(\\Gamma)$, with $w = -(\\text{vertex sign})^V (\\text{tree factor})^{k} \\, c_\\Gamma / S$ (${latexText('see zFromGraphs in the conventions above')}).`);
   body.push('{\\small');
-  body.push('\\begin{longtable}{@{}r c c c c c c p{5.6cm}@{}}');
+  // Fixed column widths: longtable then aligns its chunks in a single pdflatex run.
+  body.push('\\begin{longtable}{@{}p{0.6cm} p{1.7cm} p{0.8cm} p{0.7cm} p{2.5cm} p{2.5cm} p{0.6cm} p{4.2cm}@{}}');
   const head = '\\# & $\\Gamma$ & $Z$ & $1/S$ & $c_\\Gamma$ & $w$ & $g^L$ & $S_R(\\Gamma)$ \\\\ \\hline';
   body.push(`${head}\n\\endfirsthead\n${head}\n\\endhead`);
   d.graphs.forEach((g, i) => {
