@@ -18,7 +18,11 @@ export function countertermMarks(theory: Theory, residue: readonly string[], ome
   const vertex = theory.vertices.find((v) => v.fields.join(',') === key);
   if (vertex && vertex.derivatives === omega) return [null];
   if (sorted.length === 2) {
+    // Two-point residues: the structure carries ω powers of momentum — p² (ω = 2), p̸ for a
+    // fermion (ω = 1), and a mass-type insertion m² (ω = 0, e.g. a self-energy that contains a
+    // φ² insertion).
     const f = fieldByName(theory, sorted[0]!) ?? theory.fields.find((x) => x.antiparticle === sorted[0]);
+    if (omega === 0) return [{ residue: sorted, structure: 'm2' }];
     if (f && f.statistics === 'fermion') return [{ residue: sorted, structure: 'pslash' }];
     return [{ residue: sorted, structure: 'p2' }];
   }
