@@ -1,9 +1,9 @@
-import { evaluatePolyApprox, expandExpression, formatPoly, MAX_EXPANSION_ORDER, seriesToLatex, variableInfo, type Series } from '../../core/algebra/index.ts';
+import { evaluatePolyApprox, expandExpression, formatPoly, MAX_EXPANSION_ORDER, MAX_TERM_PRODUCTS, seriesToLatex, variableInfo, type Series } from '../../core/algebra/index.ts';
 import { InputError, LimitError } from '../../core/errors.ts';
 import { flag, hasFlag, type ParsedArgs } from '../args.ts';
 import { EXIT, type CliIO, type Command } from '../command.ts';
 
-const USAGE = `usage: coppice expand "<expression>" [--order n] [--json | --latex]
+const USAGE = `usage: coppice expand "<expression>" [--order n] [--json | --latex] [--max-term-products N]
 
 The Laurent expansion in eps of an expression, exact through eps^n (default n = 0;
 |n| at most ${MAX_EXPANSION_ORDER}). D = 4 - 2*eps conventions are up to you: eps is just the variable.
@@ -17,6 +17,8 @@ in the canonical text form, with its floating value when it has no free symbols.
 --json: {"series": {"<power>": "<canonical exact>", ...}, "order": n}, every power present
 (zeros as "0"); when some coefficients are approximate, also "approximate": ["<power>", ...].
 --latex: the expansion as one LaTeX expression.
+--max-term-products: the work allowed, in products of polynomial terms weighted by their size
+(default ${MAX_TERM_PRODUCTS}, a few seconds); larger requests are refused with exit 3.
 
 example: coppice expand "Gamma(eps)*Gamma(1-eps)^2/Gamma(2-2*eps)*exp(euler_gamma*eps)" --order 2`;
 
@@ -29,6 +31,15 @@ function readOrder(args: ParsedArgs): number {
     throw new LimitError('expansion order', 'maxOrder', MAX_EXPANSION_ORDER, v, `ask for an order between -${MAX_EXPANSION_ORDER} and ${MAX_EXPANSION_ORDER}`);
   }
   return n;
+}
+
+function readMaxTermProducts(args: ParsedArgs): number {
+  const v = flag(args, 'max-term-products');
+  if (v === undefined) return MAX_TERM_PRODUCTS;
+  if (!/^\d+$/.test(v) || !Number.isSafeInteger(Number(v)) || Number(v) < 1) {
+    throw new InputError(`--max-term-products must be a positive integer, got "${v}"`, undefined, `e.g. --max-term-products ${MAX_TERM_PRODUCTS * 10}`);
+  }
+  return Number(v);
 }
 
 /** The powers reported: from the leading pole (or eps^0) through the order. */
@@ -51,7 +62,7 @@ export const expandCommand: Command = {
   name: 'expand',
   summary: 'Laurent expansion in eps of an expression with Gammas, zeta values and constants',
   usage: USAGE,
-  flags: { booleans: ['json', 'latex'], values: ['order'] },
+  flags: { booleans: ['json', 'latex'], values: ['order', 'max-term-products'] },
   run(args: ParsedArgs, io: CliIO): number {
     if (args.positional.length !== 1) {
       throw new InputError(
@@ -61,7 +72,7 @@ export const expandCommand: Command = {
       );
     }
     const order = readOrder(args);
-    const s = expandExpression(args.positional[0]!, order);
+    const s = expandExpression(args.positional[0]!, order, { maxTermProducts: readMaxTermProducts(args), cancel: io.cancel });
     const ps = powers(s, order);
     const approximate = ps.filter((p) => !s.coeff(p).isExact()).map(String);
     if (hasFlag(args, 'json')) {

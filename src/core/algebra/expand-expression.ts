@@ -20,6 +20,8 @@ import { powSeries } from './series-power.ts';
 import { Series } from './series.ts';
 import { Rational } from './rational.ts';
 import { MAX_ZETA_ARGUMENT, zetaPoly } from './zeta.ts';
+import { MAX_TERM_PRODUCTS, withWorkBudget } from './work-budget.ts';
+import type { CancelToken } from '../util/cancel.ts';
 
 /** Highest order `expand` accepts. */
 export const MAX_EXPANSION_ORDER = 40;
@@ -30,6 +32,10 @@ export interface ExpandOptions {
   readonly input?: string;
   /** Highest order accepted (default MAX_EXPANSION_ORDER = 40). */
   readonly maxOrder?: number;
+  /** Products of polynomial terms allowed (default MAX_TERM_PRODUCTS); a LimitError names maxTermProducts. */
+  readonly maxTermProducts?: number;
+  /** Polled as the work is done. */
+  readonly cancel?: CancelToken;
 }
 
 /**
@@ -47,6 +53,10 @@ export function expandExpression(expr: string | ExprNode, order: number, options
   const input = options.input ?? 'expression';
   const tree = typeof expr === 'string' ? parseExpression(expr, input) : expr;
   const ctx: Ctx = { source, input };
+  return withWorkBudget(options.maxTermProducts ?? MAX_TERM_PRODUCTS, options.cancel, () => expandTree(tree, order, maxOrder, ctx));
+}
+
+function expandTree(tree: ExprNode, order: number, maxOrder: number, ctx: Ctx): Series {
   let cap = order;
   for (let attempt = 0; attempt < 12; attempt++) {
     const s = evaluate(tree, cap, ctx);

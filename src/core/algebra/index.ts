@@ -36,6 +36,7 @@ export { logGamma1p, gammaExpForm, splitGammaArgument, MAX_GAMMA_SHIFT } from '.
 export { type GammaArg, type GammaProductSpec, gammaProduct, gammaProductForm, gammaSeries } from './gamma-product.ts';
 export { type ExprNode, type ParseLimits, DEFAULT_PARSE_LIMITS, parseExpression } from './parse-expression.ts';
 export { type ExpandOptions, expandExpression, MAX_EXPANSION_ORDER } from './expand-expression.ts';
+export { MAX_TERM_PRODUCTS, withWorkBudget } from './work-budget.ts';
 export { parsePoly } from './parse-poly.ts';
 export { formatMonomial, formatPoly, formatSeries, formatSeriesExact } from './format-text.ts';
 export { monomialToLatex, polyToLatex, seriesToLatex } from './format-latex.ts';

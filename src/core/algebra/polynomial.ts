@@ -5,6 +5,7 @@
 import { addNum, isExactNum, isZeroNum, mulNum, negNum, type Num } from './num.ts';
 import { Rational } from './rational.ts';
 import { compareMonomials, mulMonomials, ONE_MONOMIAL, powMonomial, type Monomial } from './monomial.ts';
+import { chargeTermProducts } from './work-budget.ts';
 
 /** One term `coeff * mono`. */
 export interface Term {
@@ -17,6 +18,7 @@ export class Poly {
   /** Terms by monomial key. Do not mutate. */
   readonly map: ReadonlyMap<string, Term>;
   private sortedCache: readonly Term[] | undefined;
+  private wordsCache: number | undefined;
 
   private constructor(map: ReadonlyMap<string, Term>) {
     this.map = map;
@@ -45,14 +47,31 @@ export class Poly {
    * inner loop of series products, without intermediate polynomials.
    */
   static sumOfProducts(items: Iterable<readonly [Poly, Poly, Num?]>): Poly {
+    const list = Array.isArray(items) ? (items as readonly (readonly [Poly, Poly, Num?])[]) : [...items];
+    let work = 0;
+    for (const [a, b] of list) work += a.map.size * b.map.size * (a.words() + b.words());
+    chargeTermProducts(work);
     const m = new Map<string, Term>();
-    for (const [a, b, c] of items) {
+    for (const [a, b, c] of list) {
       for (const x of a.map.values()) {
         const xc = c === undefined ? x.coeff : mulNum(x.coeff, c);
         for (const y of b.map.values()) accumulate(m, mulMonomials(x.mono, y.mono), mulNum(xc, y.coeff));
       }
     }
     return new Poly(m);
+  }
+
+  /**
+   * Size of a typical coefficient in 64-bit words (at least 1), from one term: the cost of a
+   * term product grows with it, which the work budget (work-budget.ts) takes into account.
+   */
+  words(): number {
+    if (this.wordsCache === undefined) {
+      const t = this.map.values().next().value;
+      const c = t?.coeff;
+      this.wordsCache = c instanceof Rational ? 1 + Math.floor((c.n.toString(16).length + c.d.toString(16).length) / 16) : 1;
+    }
+    return this.wordsCache;
   }
 
   /** Terms in the canonical order (DESIGN §4). */
@@ -104,6 +123,7 @@ export class Poly {
     if (this.map.size === 0 || o.map.size === 0) return Poly.ZERO;
     if (o.map.size === 1 && o.map.has('')) return this.scale(o.map.get('')!.coeff);
     if (this.map.size === 1 && this.map.has('')) return o.scale(this.map.get('')!.coeff);
+    chargeTermProducts(this.map.size * o.map.size * (this.words() + o.words()));
     const m = new Map<string, Term>();
     for (const a of this.map.values()) {
       for (const b of o.map.values()) accumulate(m, mulMonomials(a.mono, b.mono), mulNum(a.coeff, b.coeff));

@@ -111,6 +111,8 @@ export function generateGraphs(theory: Theory, opts: GenerateOptions): Generatio
   const ctx = generationContext(theory, opts.residue);
   const all = opts.all ?? false;
   const vectors = vertexCountVectors(ctx, opts.loops);
+  // Without legs every graph is scaleless as a whole (hasScalelessPart): none is kept unless `all`.
+  if (ctx.legs.length === 0 && !all) return { graphs: [], weight: Rational.ZERO, states: 0 };
   const maxGraphs = opts.limits?.maxGraphs ?? 3_000_000;
   const estimate = estimateGraphCount(ctx, vectors);
   if (estimate > maxGraphs) {
