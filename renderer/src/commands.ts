@@ -4,7 +4,7 @@
  */
 import type { Ref } from 'vue';
 import { CoppiceError, parseNotation, printNotation } from '../../src/core/index.ts';
-import type { GraphLink, MenuCommand } from '../../src/core/project/ipc-contract.ts';
+import { isSaveConflict, type GraphLink, type MenuCommand } from '../../src/core/project/ipc-contract.ts';
 import { toEngineGraph } from '../../src/core/project/index.ts';
 import type { Platform } from './platform/platform.ts';
 import { useDocumentStore } from './stores/document.ts';
@@ -54,10 +54,20 @@ export function useCommands(platform: Platform, canvas: Ref<CanvasApi | null>, n
     if (f && openText(f.text, f.path)) say('info', `Opened ${doc.fileName}.`);
     else if (!f) say('error', `${path} could not be read.`);
   }
-  async function save(as = false): Promise<void> {
-    const req = { text: doc.serialize(), suggestedName: doc.fileName, ...(!as && doc.filePath && platform.kind === 'desktop' ? { path: doc.filePath } : {}) };
+  async function save(as = false, overwrite = false): Promise<void> {
+    const req = {
+      text: doc.serialize(),
+      suggestedName: doc.fileName,
+      ...(!as && doc.filePath && platform.kind === 'desktop' ? { path: doc.filePath } : {}),
+      ...(overwrite ? { overwrite: true } : {}),
+    };
     try {
       const path = as ? await platform.saveProjectAs(req) : await platform.saveProject(req);
+      if (isSaveConflict(path)) {
+        // Changed on disk since it was opened: nothing is written until the user chooses.
+        notice.value = { kind: 'error', text: `Not saved: ${path.message}. Overwrite it, or use Save As to keep both.`, action: { label: 'Overwrite', run: () => void save(false, true) } };
+        return;
+      }
       if (!path) return;
       doc.markSaved(path);
       await platform.autosave(null);

@@ -6,8 +6,8 @@ import { app, BrowserWindow, dialog, ipcMain, Menu, protocol, shell, type FileFi
 import { existsSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { IPC, LINK_SCHEME, type GraphLink, type MenuCommand, type Startup } from '../core/project/ipc-contract.ts';
-import { atomicWrite, readTextFile, RecentFiles, RecoveryFile } from './files.ts';
+import { IPC, LINK_SCHEME, type GraphLink, type MenuCommand, type SaveResult, type Startup } from '../core/project/ipc-contract.ts';
+import { atomicWrite, FileChangedError, fingerprintOf, readTextFile, RecentFiles, RecoveryFile, saveDocument, type Fingerprint } from './files.ts';
 import { registerIpc, senderCheck } from './ipc.ts';
 import { menuTemplate } from './menu.ts';
 import { APP_ORIGIN, registerAppScheme, serveApp } from './protocol.ts';
@@ -25,7 +25,14 @@ else app.setAsDefaultProtocolClient(LINK_SCHEME);
 
 const windows = new Set<BrowserWindow>();
 const dirty = new Map<number, boolean>();
-const pendingLinks: GraphLink[] = linksFromArgv(process.argv);
+/** A link from outside that fails validation is refused, logged and shown, never opened. */
+function refuseLink(message: string): void {
+  console.warn(`coppice: ${message}`);
+  if (app.isReady()) dialog.showErrorBox('Coppice did not open the link', message);
+}
+const pendingLinks: GraphLink[] = linksFromArgv(process.argv, refuseLink);
+/** What each project file was when we last read or wrote it, to refuse overwriting changes made elsewhere. */
+const onDisk = new Map<string, Fingerprint>();
 let recent: RecentFiles;
 let recovery: RecoveryFile;
 
@@ -66,13 +73,22 @@ async function openInFocused(path: string): Promise<void> {
 
 async function readProjectFile(path: string) {
   const text = await readTextFile(path);
+  const fp = await fingerprintOf(path, text);
+  if (fp) onDisk.set(path, fp);
   await recent.add(path);
   refreshMenu();
   return { path, text };
 }
 
-async function saveTo(path: string, text: string): Promise<string> {
-  await atomicWrite(path, text);
+/** Saves with a backup of the previous version; a file changed on disk since we read it is a conflict, unless `overwrite`. */
+async function saveTo(path: string, text: string, overwrite = false): Promise<SaveResult> {
+  try {
+    const fp = await saveDocument(path, text, { expected: onDisk.get(path), overwrite });
+    if (fp) onDisk.set(path, fp);
+  } catch (e) {
+    if (e instanceof FileChangedError) return { conflict: 'changed-on-disk', path, message: e.message };
+    throw e;
+  }
   await recent.add(path);
   refreshMenu();
   return path;
@@ -109,7 +125,7 @@ function deliverLink(link: GraphLink): void {
 }
 
 app.on('second-instance', (_e, argv) => {
-  linksFromArgv(argv).forEach(deliverLink);
+  linksFromArgv(argv, refuseLink).forEach(deliverLink);
   const win = focused();
   if (win) {
     if (win.isMinimized()) win.restore();
@@ -118,7 +134,7 @@ app.on('second-instance', (_e, argv) => {
 });
 app.on('open-url', (e, url) => {
   e.preventDefault();
-  linksFromArgv([url]).forEach(deliverLink);
+  linksFromArgv([url], refuseLink).forEach(deliverLink);
 });
 app.on('web-contents-created', (_e, contents) => {
   contents.on('will-attach-webview', (ev) => ev.preventDefault());
@@ -157,14 +173,15 @@ void app.whenReady().then(async () => {
       return readProjectFile(r.filePaths[0]);
     },
     async saveProject(sender, req) {
-      if (req.path && recent.has(req.path)) return saveTo(req.path, req.text);
+      if (req.path && recent.has(req.path)) return saveTo(req.path, req.text, req.overwrite ?? false);
       return this.saveProjectAs(sender, req);
     },
     async saveProjectAs(sender, req) {
       const win = winOf(sender);
       const r = win ? await dialog.showSaveDialog(win, { defaultPath: req.path ?? req.suggestedName, filters: projectFilters }) : null;
       if (!r || r.canceled || !r.filePath) return null;
-      return saveTo(r.filePath, req.text);
+      // The dialog has asked about replacing an existing file.
+      return saveTo(r.filePath, req.text, true);
     },
     async exportFile(sender, req) {
       const win = winOf(sender);

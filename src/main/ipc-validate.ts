@@ -7,7 +7,7 @@ const fileName = z.string().min(1).max(255).refine((s) => !/[\\/\0]/.test(s), 'a
 const absolutePath = z.string().min(1).max(4096).refine((s) => !s.includes('\0') && (s.startsWith('/') || /^[A-Za-z]:[\\/]/.test(s) || s.startsWith('\\\\')), 'an absolute path');
 
 export const payloadSchemas = {
-  saveRequest: z.strictObject({ path: absolutePath.optional(), text, suggestedName: fileName }),
+  saveRequest: z.strictObject({ path: absolutePath.optional(), text, suggestedName: fileName, overwrite: z.boolean().optional() }),
   exportRequest: z.strictObject({ text, suggestedName: fileName, format: z.enum(['latex', 'tikz', 'svg', 'json', 'text']) }),
   path: absolutePath,
   autosave: text.nullable(),

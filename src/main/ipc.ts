@@ -3,8 +3,8 @@
  * windows showing our own page, validates the payload, then calls the file layer. Electron's
  * ipcMain is passed in, so tests drive this module with a small fake.
  */
-import { IPC, type ExportRequest, type OpenedFile, type SaveRequest, type Startup } from '../core/project/ipc-contract.ts';
-import { payloadSchemas as S, validate } from './ipc-validate.ts';
+import { IPC, type ExportRequest, type OpenedFile, type SaveRequest, type SaveResult, type Startup } from '../core/project/ipc-contract.ts';
+import { PayloadError, payloadSchemas as S, validate } from './ipc-validate.ts';
 
 /** The parts of an IPC event we look at. */
 export interface IpcEventLike {
@@ -22,8 +22,8 @@ export interface IpcMainLike {
 export interface IpcHandlers {
   startup(sender: number): Promise<Startup>;
   openProject(sender: number): Promise<OpenedFile | null>;
-  saveProject(sender: number, req: SaveRequest): Promise<string | null>;
-  saveProjectAs(sender: number, req: SaveRequest): Promise<string | null>;
+  saveProject(sender: number, req: SaveRequest): Promise<SaveResult>;
+  saveProjectAs(sender: number, req: SaveRequest): Promise<SaveResult>;
   exportFile(sender: number, req: ExportRequest): Promise<string | null>;
   recentFiles(): Promise<readonly string[]>;
   openRecent(path: string): Promise<OpenedFile | null>;
@@ -52,11 +52,24 @@ export function senderCheck(ownContents: () => Iterable<number>, appOrigin: stri
   };
 }
 
-export function registerIpc(ipc: IpcMainLike, trusted: (e: IpcEventLike) => boolean, h: IpcHandlers): void {
+/**
+ * Registers every channel. An untrusted sender or a malformed payload is refused (the
+ * renderer's promise rejects) and logged through `log`; the handler is never called.
+ */
+export function registerIpc(ipc: IpcMainLike, trusted: (e: IpcEventLike) => boolean, h: IpcHandlers, log: (message: string) => void = (m) => console.warn(`coppice: ${m}`)): void {
   const invoke = (channel: string, run: (e: IpcEventLike, args: unknown[]) => unknown) =>
     ipc.handle(channel, async (e, ...args) => {
-      if (!trusted(e)) throw new UntrustedSenderError(channel);
-      return run(e, args);
+      if (!trusted(e)) {
+        const err = new UntrustedSenderError(channel);
+        log(err.message);
+        throw err;
+      }
+      try {
+        return await run(e, args);
+      } catch (err) {
+        if (err instanceof PayloadError) log(err.message);
+        throw err;
+      }
     });
   invoke(IPC.startup, (e, a) => (validate(S.none, IPC.startup, a), h.startup(e.sender.id)));
   invoke(IPC.openProject, (e, a) => (validate(S.none, IPC.openProject, a), h.openProject(e.sender.id)));
@@ -68,8 +81,9 @@ export function registerIpc(ipc: IpcMainLike, trusted: (e: IpcEventLike) => bool
   invoke(IPC.revealInFolder, (_e, a) => h.revealInFolder(validate(S.path, IPC.revealInFolder, a[0])));
   invoke(IPC.autosave, (_e, a) => h.autosave(validate(S.autosave, IPC.autosave, a[0])));
   ipc.on(IPC.setDirty, (e, ...a) => {
-    if (!trusted(e)) return;
+    if (!trusted(e)) return log(new UntrustedSenderError(IPC.setDirty).message);
     const r = S.dirty.safeParse(a[0]);
     if (r.success) h.setDirty(e.sender.id, r.data);
+    else log(new PayloadError(IPC.setDirty, 'value: expected a boolean').message);
   });
 }

@@ -3,7 +3,7 @@
  * privileged (standard, secure, fetch, streams) so module workers and query strings work,
  * which they do not on file://. Every response carries the Content Security Policy.
  */
-import { readFile } from 'node:fs/promises';
+import { readFile, realpath as fsRealpath } from 'node:fs/promises';
 import { extname, join, normalize, sep } from 'node:path';
 import { APP_SCHEME } from '../core/project/ipc-contract.ts';
 
@@ -65,19 +65,39 @@ export function resolveAppPath(root: string, url: string): string | null {
   } catch {
     return null;
   }
-  if (rel.includes('\0')) return null;
+  // NUL, and backslashes (a path separator on Windows, where `..\` would escape normalization checks).
+  if (rel.includes('\0') || rel.includes('\\')) return null;
   if (rel === '/' || rel === '') rel = '/index.html';
   const full = normalize(join(root, rel));
   const base = normalize(root.endsWith(sep) ? root : root + sep);
   return full.startsWith(base) ? full : null;
 }
 
-export function serveApp(protocol: Pick<ProtocolLike, 'handle'>, root: string, read: (p: string) => Promise<Buffer> = readFile): void {
+/** Whether `path` lies inside the folder `root` (both already resolved). */
+function inside(root: string, path: string): boolean {
+  const base = root.endsWith(sep) ? root : root + sep;
+  return path.startsWith(base);
+}
+
+/**
+ * Serves the renderer folder. The path a URL names must lie inside `root`, and so must the
+ * file it really is: symbolic links are resolved (`realpath`) and a link out of the folder
+ * is refused like any other path outside it.
+ */
+export function serveApp(
+  protocol: Pick<ProtocolLike, 'handle'>,
+  root: string,
+  read: (p: string) => Promise<Buffer> = readFile,
+  realpath: (p: string) => Promise<string> = fsRealpath,
+): void {
+  const realRoot = realpath(root).catch(() => null);
   protocol.handle(APP_SCHEME, async (req) => {
     const path = resolveAppPath(root, req.url);
     if (!path) return new Response('not found', { status: 404 });
     try {
-      const body = await read(path);
+      const [rootReal, fileReal] = await Promise.all([realRoot, realpath(path)]);
+      if (!rootReal || !inside(rootReal, fileReal)) return new Response('not found', { status: 404 });
+      const body = await read(fileReal);
       return new Response(new Uint8Array(body), {
         headers: { 'content-type': TYPES[extname(path)] ?? 'application/octet-stream', 'content-security-policy': CONTENT_SECURITY_POLICY, 'x-content-type-options': 'nosniff' },
       });

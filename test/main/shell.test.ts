@@ -53,7 +53,7 @@ describe('page protocol', () => {
 
   it('serves files with the content security policy', async () => {
     let handler: ((r: Request) => Response | Promise<Response>) | null = null;
-    serveApp({ handle: (_s, h) => void (handler = h) }, '/r', async (p) => Buffer.from(`file ${p}`));
+    serveApp({ handle: (_s, h) => void (handler = h) }, '/r', async (p) => Buffer.from(`file ${p}`), async (p) => p);
     const ok = await handler!(new Request(`${APP_ORIGIN}/index.html`));
     expect(ok.status).toBe(200);
     expect(ok.headers.get('content-security-policy')).toBe(CONTENT_SECURITY_POLICY);

@@ -3,14 +3,15 @@
  * otherwise the browser fallback (file picker, downloads, localStorage). The renderer never
  * assumes `window.coppice` exists.
  */
-import type { CoppiceBridge, ExportRequest, GraphLink, MenuCommand, OpenedFile, SaveRequest, Startup } from '../../../src/core/project/ipc-contract.ts';
+import type { CoppiceBridge, ExportRequest, GraphLink, MenuCommand, OpenedFile, SaveRequest, SaveResult, Startup } from '../../../src/core/project/ipc-contract.ts';
 
 export interface Platform {
   readonly kind: 'desktop' | 'browser';
   startup(): Promise<Startup>;
   openProject(): Promise<OpenedFile | null>;
-  saveProject(req: SaveRequest): Promise<string | null>;
-  saveProjectAs(req: SaveRequest): Promise<string | null>;
+  /** The path written, null when cancelled, or a conflict (the file changed on disk; desktop only). */
+  saveProject(req: SaveRequest): Promise<SaveResult>;
+  saveProjectAs(req: SaveRequest): Promise<SaveResult>;
   exportFile(req: ExportRequest): Promise<string | null>;
   recentFiles(): Promise<readonly string[]>;
   openRecent(path: string): Promise<OpenedFile | null>;

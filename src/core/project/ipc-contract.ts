@@ -17,6 +17,23 @@ export interface SaveRequest {
   readonly text: string;
   /** File name proposed in the save dialog. */
   readonly suggestedName: string;
+  /** Write even though the file changed on disk since it was opened (after the user agreed). */
+  readonly overwrite?: boolean;
+}
+
+/** A save refused because the file changed on disk since it was opened or last saved. */
+export interface SaveConflict {
+  readonly conflict: 'changed-on-disk';
+  readonly path: string;
+  /** A sentence for the user. */
+  readonly message: string;
+}
+
+/** What a save answers: the path written, null when the user cancelled, or a conflict. */
+export type SaveResult = string | null | SaveConflict;
+
+export function isSaveConflict(r: unknown): r is SaveConflict {
+  return typeof r === 'object' && r !== null && (r as SaveConflict).conflict === 'changed-on-disk';
 }
 
 export interface ExportRequest {
@@ -52,9 +69,13 @@ export interface CoppiceBridge {
   readonly platform: string;
   startup(): Promise<Startup>;
   openProject(): Promise<OpenedFile | null>;
-  /** Saves atomically; returns the path written, or null when the user cancelled. */
-  saveProject(req: SaveRequest): Promise<string | null>;
-  saveProjectAs(req: SaveRequest): Promise<string | null>;
+  /**
+   * Saves atomically (keeping the previous version as `<file>.bak`); returns the path written,
+   * null when the user cancelled, or a conflict when the file changed on disk since it was
+   * opened — ask the user, then save again with `overwrite: true` or save as.
+   */
+  saveProject(req: SaveRequest): Promise<SaveResult>;
+  saveProjectAs(req: SaveRequest): Promise<SaveResult>;
   exportFile(req: ExportRequest): Promise<string | null>;
   recentFiles(): Promise<readonly string[]>;
   openRecent(path: string): Promise<OpenedFile | null>;
