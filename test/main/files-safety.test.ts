@@ -101,7 +101,7 @@ describe('killed mid-save', () => {
     });
   }
 
-  it('the target, its backup and the recovery file are always complete old or new versions', { timeout: 60_000 }, async () => {
+  it('the target, its backup and the recovery file are always complete old or new versions', { timeout: 120_000 }, async () => {
     // Seeded kill times from 0 to 400 ms after the loop starts (a version takes some tens of ms).
     let seed = 12345;
     const rand = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
@@ -109,7 +109,9 @@ describe('killed mid-save', () => {
     const recovery = join(dir, 'recovery.coppice.json');
     const rounds = 12;
     let killedMidWrite = 0;
-    for (let round = 0; round < rounds; round++) {
+    // Keep killing (up to 30 rounds) until at least 4 kills landed mid-write: how many do depends
+    // on the machine's speed, and the invariant below must be exercised in that window.
+    for (let round = 0; round < 30 && (round < rounds || killedMidWrite < 4); round++) {
       const before = await readFile(target, 'utf8').then(versionOf, () => 0);
       const { saving, saved } = await runAndKill(target, recovery, Math.floor(rand() * 400));
       if (saving > saved) killedMidWrite++;
@@ -129,8 +131,7 @@ describe('killed mid-save', () => {
       const rec = await readFile(recovery, 'utf8');
       expect(rec).toBe(stressProject(versionOf(rec), GRAPHS));
     }
-    // Most kills land in the middle of a write (the loop does little else).
-    expect(killedMidWrite).toBeGreaterThan(rounds / 2);
+    expect(killedMidWrite).toBeGreaterThanOrEqual(4);
     // The app restores from the recovery file left by the last killed run.
     const rec = await new RecoveryFile(recovery, fs).read();
     expect(rec).not.toBeNull();
