@@ -107,7 +107,39 @@ export async function saveDocument(
   }
   if (old) await atomicWrite(`${path}.bak`, old, fs);
   await atomicWrite(path, text, fs);
+  await removeStaleTemps(path).catch(() => {});
   return fingerprintOf(path, text, fs);
+}
+
+/**
+ * Removes temporary files that an earlier, killed save left beside `path`
+ * (`.<name>.<pid>.<random>.tmp` whose process is gone). Temp files of live processes stay:
+ * another window may be saving right now. Returns the names removed.
+ */
+export async function removeStaleTemps(
+  path: string,
+  dir: { readdir(p: string): Promise<string[]>; rm(p: string, o: { force: boolean }): Promise<void> } = nodeFs,
+  alive: (pid: number) => boolean = processAlive,
+): Promise<string[]> {
+  const prefix = `.${basename(path)}.`;
+  const removed: string[] = [];
+  for (const name of await dir.readdir(dirname(path))) {
+    if (!name.startsWith(prefix) || !name.endsWith('.tmp')) continue;
+    const m = /^(\d+)\.[a-z0-9]+\.tmp$/.exec(name.slice(prefix.length));
+    if (!m || alive(Number(m[1]))) continue;
+    await dir.rm(join(dirname(path), name), { force: true });
+    removed.push(name);
+  }
+  return removed;
+}
+
+function processAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (e) {
+    return (e as NodeJS.ErrnoException).code === 'EPERM';
+  }
 }
 
 /** Reads a text file, refusing anything larger than a project file may be. */

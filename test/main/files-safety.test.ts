@@ -140,3 +140,20 @@ describe('killed mid-save', () => {
     expect(project.name).toMatch(/^stress v\d+$/);
   });
 });
+
+describe('temporary files left by a killed save', () => {
+  it('are removed on the next save when their process is gone; live ones stay', async () => {
+    const { removeStaleTemps } = await import('../../src/main/files.ts');
+    const { mkdtemp, writeFile: wf, readdir } = await import('node:fs/promises');
+    const { tmpdir: td } = await import('node:os');
+    const d = await mkdtemp(join(td(), 'coppice-tmp-'));
+    const target = join(d, 'p.coppice.json');
+    await wf(target, '{}');
+    await wf(join(d, '.p.coppice.json.999999.abc123.tmp'), 'half');
+    await wf(join(d, `.p.coppice.json.${process.pid}.def456.tmp`), 'in progress');
+    await wf(join(d, '.other.json.999999.abc123.tmp'), 'not ours');
+    const removed = await removeStaleTemps(target, undefined, (pid) => pid === process.pid);
+    expect(removed).toEqual(['.p.coppice.json.999999.abc123.tmp']);
+    expect((await readdir(d)).sort()).toEqual(['.other.json.999999.abc123.tmp', `.p.coppice.json.${process.pid}.def456.tmp`, 'p.coppice.json'].sort());
+  });
+});
