@@ -31,6 +31,8 @@ export interface GenerateOptions {
   readonly all?: boolean;
   readonly limits?: GenerateLimits;
   readonly cancel?: CancelToken;
+  /** Called as the work advances: lines drawn so far over lines to draw, summed over vertex-count vectors. */
+  readonly progress?: (done: number, total: number) => void;
 }
 
 /** One generated graph, legs labelled 1..n in residue order. */
@@ -124,6 +126,8 @@ export function generateGraphs(theory: Theory, opts: GenerateOptions): Generatio
   const canon = new LabelledCanonicalizer(ctx, theory.defaultField);
   const graphs: GeneratedGraph[] = [];
   let states = 0;
+  const totalLevels = vectors.reduce((t, c) => t + linesOf(ctx, c) + 1, 0);
+  let levelsDone = 0;
   for (const counts of vectors) {
     const E = linesOf(ctx, counts);
     const buckets: Map<string, { s: PartialState; gens?: readonly Int32Array[] }>[] = Array.from({ length: E + 1 }, () => new Map());
@@ -145,6 +149,7 @@ export function generateGraphs(theory: Theory, opts: GenerateOptions): Generatio
         }
       }
       buckets[e]!.clear();
+      opts.progress?.(++levelsDone, totalLevels);
     }
     for (const { s, gens } of buckets[E]!.values()) {
       cancel.throwIfCancelled();
@@ -160,6 +165,7 @@ export function generateGraphs(theory: Theory, opts: GenerateOptions): Generatio
         graphs.push({ notation: cf.notation, graph: cf.graph, symmetryFactor: cf.groupOrder * lineFactor, vanishes, vertexCounts });
       }
     }
+    opts.progress?.(++levelsDone, totalLevels);
   }
   graphs.sort((x, y) => compareCounts(x.vertexCounts, y.vertexCounts) || (x.notation < y.notation ? -1 : x.notation > y.notation ? 1 : 0));
   let weight = Rational.ZERO;
