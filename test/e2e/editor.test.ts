@@ -2,7 +2,7 @@ import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { clickCanvas, haveChromium, openApp, screenshotDir, startHarness, type Harness } from './harness.ts';
 
-describe.skipIf(!haveChromium)('the app in Chromium', () => {
+describe.skipIf(!haveChromium && !process.env.CI)('the app in Chromium', () => {
   let h: Harness;
   beforeAll(async () => {
     h = await startHarness();

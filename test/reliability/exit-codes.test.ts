@@ -58,7 +58,7 @@ describe('exit codes and streams (in-process)', () => {
   });
 });
 
-describe.skipIf(!built)('exit codes and streams (built binary, worker-thread entry)', () => {
+describe.skipIf(!built && !process.env.CI)('exit codes and streams (built binary, worker-thread entry)', () => {
   it('results on stdout, messages on stderr, codes 0 / 1 / 2', async () => {
     const [ok, no, bad1] = await Promise.all([
       runBin(['inspect', '--theory', 'phi4', '--graph', BUBBLE, '--json']),

@@ -1,10 +1,10 @@
-import { isatty } from 'node:tty';
 import { InputError } from '../../core/errors.ts';
 import { generateGraphs, type GeneratedGraph } from '../../core/generate/index.ts';
 import { groupFactor, hasGroupFactors } from '../../core/group/index.ts';
 import type { Theory } from '../../core/theory/types.ts';
 import { flag, hasFlag, intFlag, requireFlag } from '../args.ts';
-import { EXIT, type CliIO, type Command } from '../command.ts';
+import { EXIT, type Command } from '../command.ts';
+import { terminalProgress } from '../progress.ts';
 import { resolveTheory } from '../inputs.ts';
 
 const usage = `coppice generate --theory <name|file.json> --legs <n | fields> --loops L [--all] [--json] [--max-graphs N]
@@ -53,7 +53,7 @@ export const generateCommand: Command = {
     if (loops < 0) requireFlag(args, 'loops', 'e.g. --loops 2');
     const all = hasFlag(args, 'all');
     const maxGraphs = intFlag(args, 'max-graphs', 3_000_000);
-    const progress = progressOnTerminal(io);
+    const progress = terminalProgress(io, 'generating');
     const result = generateGraphs(theory, { residue, loops, all, limits: { maxGraphs }, cancel: io.cancel, ...(progress ? { progress } : {}) });
     const tensors = hasGroupFactors(theory);
     const factor = (g: GeneratedGraph) => (tensors ? groupFactor(theory, g.graph)!.text : undefined);
@@ -95,17 +95,3 @@ export const generateCommand: Command = {
     return EXIT.ok;
   },
 };
-
-/** A progress bar on stderr when it is a terminal (the command runs in a worker: ask the fd). */
-function progressOnTerminal(io: CliIO): ((done: number, total: number) => void) | undefined {
-  if (!isatty(2)) return undefined;
-  let last = 0;
-  return (done, total) => {
-    const now = Date.now();
-    if (done < total && now - last < 100) return;
-    last = now;
-    const width = 30;
-    const filled = Math.round((width * done) / Math.max(1, total));
-    io.err(`\r  generating [${'#'.repeat(filled)}${' '.repeat(width - filled)}] ${Math.round((100 * done) / Math.max(1, total))}%${done >= total ? '\r\x1b[K' : ''}`);
-  };
-}

@@ -1,10 +1,10 @@
-import { isatty } from 'node:tty';
 import { expandExpression } from '../../core/algebra/expand-expression.ts';
 import type { Series } from '../../core/algebra/series.ts';
 import { InputError } from '../../core/errors.ts';
 import { computeRg, rgConventions, rgReport, type RgCoefficients, type RgReport } from '../../core/rg/index.ts';
 import { flag, flagAll, hasFlag, intFlag, requireFlag } from '../args.ts';
-import { EXIT, type CliIO, type Command } from '../command.ts';
+import { EXIT, type Command } from '../command.ts';
+import { terminalProgress } from '../progress.ts';
 import { resolveTheory } from '../inputs.ts';
 
 const usage = `coppice rg --theory <name|file.json> --loops L --scheme <ms|msbar|g|mom> [--json] [--supply "<graph>=<expr>"]...
@@ -39,19 +39,6 @@ exact evaluator.
 Exit 0 when the RG pole relations hold, 1 when a check failed, 130 on Ctrl-C.
 `;
 
-/** A progress bar on stderr when it is a terminal (the command runs in a worker: ask the fd). */
-function progressBar(io: CliIO): ((done: number, total: number) => void) | undefined {
-  if (!isatty(2)) return undefined;
-  let last = 0;
-  return (done, total) => {
-    const now = Date.now();
-    if (done < total && now - last < 100) return;
-    last = now;
-    const width = 30;
-    const filled = Math.round((width * done) / total);
-    io.err(`\r  rg [${'#'.repeat(filled)}${' '.repeat(width - filled)}] ${done}/${total} graphs${done === total ? '\r\x1b[K' : ''}`);
-  };
-}
 
 function readSupplied(args: Parameters<Command['run']>[0]): Map<string, Series> {
   const out = new Map<string, Series>();
@@ -101,7 +88,7 @@ export const rgCommand: Command = {
     const loops = intFlag(args, 'loops', -1);
     if (loops < 0) requireFlag(args, 'loops', 'e.g. --loops 3');
     const schemeName = flag(args, 'scheme') ?? 'msbar';
-    const progress = progressBar(io);
+    const progress = terminalProgress(io, 'rg', 'graphs');
     const r = computeRg(theory, { loops, scheme: schemeName, cancel: io.cancel, supplied: readSupplied(args), ...(progress ? { progress } : {}) });
     const report = rgReport(r, rgConventions(theory, r.scheme));
     io.out(hasFlag(args, 'json') ? JSON.stringify(report) + '\n' : humanText(report));

@@ -40,21 +40,9 @@ function recordEntries(doc: LatexDocument, theory: Theory, o: ResolvedLatexOptio
   ];
 }
 
-export function fullDocument(doc: LatexDocument, blocks: readonly LatexBlock[], boxes: string, o: ResolvedLatexOptions): string {
-  const theory = doc.theory;
-  const record = recordEntries(doc, theory, o);
-  const header = [...record.map(([k, v]) => latexComment(`${k}: ${v}`)), latexComment('Macros (edit the \\providecommand lines, or define them earlier, to change how formulas look):')];
-  for (const m of latexMacros()) header.push(latexComment(`  ${m.name}${m.args ? `[${m.args}]` : ''}  ${m.meaning}`));
-  const table = [
-    '\\begin{center}\\small',
-    '\\begin{tabular}{@{}l p{10cm}@{}}',
-    ...record.map(([k, v]) => `${latexText(k)} & ${k.startsWith('convention') ? latexTypewriter(v) : latexText(v)} \\\\`),
-    '\\end{tabular}',
-    '\\end{center}',
-  ].join('\n');
-  const title = doc.kind === 'coproduct' ? 'Coproduct of a Feynman graph' : 'Counterterm of a Feynman graph';
+/** The preamble every exported document shares: article, amsmath, longtable, TikZ with our line styles. */
+export function documentPreamble(extra: readonly string[] = []): string[] {
   return [
-    ...header,
     '\\documentclass[10pt]{article}',
     '\\usepackage[margin=2cm]{geometry}',
     '\\usepackage{amsmath}',
@@ -63,7 +51,31 @@ export function fullDocument(doc: LatexDocument, blocks: readonly LatexBlock[], 
     `\\usetikzlibrary{${tikzLibraries.join(',')}}`,
     '\\allowdisplaybreaks',
     tikzStyles(),
-    ...macroDefinitions(o.scheme),
+    ...extra,
+  ];
+}
+
+/** The visible record of what a document was made from (version, theory, scheme, conventions). */
+export function recordTable(rows: readonly (readonly [string, string])[], width: string): string {
+  return [
+    '\\begin{center}\\small',
+    `\\begin{tabular}{@{}l p{${width}}@{}}`,
+    ...rows.map(([k, v]) => `${latexText(k)} & ${k.startsWith('convention') ? latexTypewriter(v) : latexText(v)} \\\\`),
+    '\\end{tabular}',
+    '\\end{center}',
+  ].join('\n');
+}
+
+export function fullDocument(doc: LatexDocument, blocks: readonly LatexBlock[], boxes: string, o: ResolvedLatexOptions): string {
+  const theory = doc.theory;
+  const record = recordEntries(doc, theory, o);
+  const header = [...record.map(([k, v]) => latexComment(`${k}: ${v}`)), latexComment('Macros (edit the \\providecommand lines, or define them earlier, to change how formulas look):')];
+  for (const m of latexMacros()) header.push(latexComment(`  ${m.name}${m.args ? `[${m.args}]` : ''}  ${m.meaning}`));
+  const table = recordTable(record, '10cm');
+  const title = doc.kind === 'coproduct' ? 'Coproduct of a Feynman graph' : 'Counterterm of a Feynman graph';
+  return [
+    ...header,
+    ...documentPreamble(macroDefinitions(o.scheme)),
     '\\begin{document}',
     `\\section*{${title}}`,
     table,

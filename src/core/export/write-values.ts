@@ -10,9 +10,9 @@ import type { Poly } from '../algebra/polynomial.ts';
 import type { Series } from '../algebra/series.ts';
 import type { Graph } from '../graph/types.ts';
 import type { Theory } from '../theory/types.ts';
-import { graphTikz, tikzLibraries, tikzStyles } from './graph-tikz.ts';
+import { graphTikz } from './graph-tikz.ts';
 import { latexComment, latexText, latexTypewriter } from './latex-text.ts';
-import { conventionEntries } from './write-document.ts';
+import { conventionEntries, documentPreamble, recordTable } from './write-document.ts';
 
 export type ValueCheckStatus = 'pass' | 'fail' | 'unchecked';
 
@@ -58,27 +58,8 @@ export function polesToLatex(s: Series): string {
   return t.replace(/ \+ \\mathcal\{O\}\(1\)$/, '').replace(/^\\mathcal\{O\}\(1\)$/, '0');
 }
 
-const preamble = (extra: string[] = []) => [
-  '\\documentclass[10pt]{article}',
-  '\\usepackage[margin=2cm]{geometry}',
-  '\\usepackage{amsmath}',
-  '\\usepackage{longtable}',
-  '\\usepackage{tikz}',
-  `\\usetikzlibrary{${tikzLibraries.join(',')}}`,
-  '\\allowdisplaybreaks',
-  tikzStyles(),
-  ...extra,
-];
+const preamble = documentPreamble;
 
-function recordTable(rows: readonly (readonly [string, string])[]): string {
-  return [
-    '\\begin{center}\\small',
-    '\\begin{tabular}{@{}l p{11cm}@{}}',
-    ...rows.map(([k, v]) => `${latexText(k)} & ${k.startsWith('convention') ? latexTypewriter(v) : latexText(v)} \\\\`),
-    '\\end{tabular}',
-    '\\end{center}',
-  ].join('\n');
-}
 
 const mark = (s: ValueCheckStatus) => (s === 'pass' ? 'pass' : s === 'fail' ? 'FAIL' : 'not checked');
 
@@ -120,7 +101,7 @@ export function writeValuesDocument(d: ValuesDocumentInput): string {
     ...preamble(),
     '\\begin{document}',
     '\\section*{Counterterm of a Feynman graph}',
-    recordTable(record),
+    recordTable(record, '11cm'),
     ...body,
     '\\end{document}',
     '',
@@ -236,7 +217,7 @@ export function writeRgDocument(d: RgDocumentInput): string {
     ...preamble(),
     '\\begin{document}',
     `\\section*{Renormalization of ${latexText(d.theory.name)} through ${d.loops} loop${d.loops === 1 ? '' : 's'}}`,
-    recordTable(record),
+    recordTable(record, '11cm'),
     ...body,
     '\\end{document}',
     '',
