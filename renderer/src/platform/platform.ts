@@ -3,24 +3,11 @@
  * otherwise the browser fallback (file picker, downloads, localStorage). The renderer never
  * assumes `window.coppice` exists.
  */
-import type { CoppiceBridge, ExportRequest, GraphLink, MenuCommand, OpenedFile, SaveRequest, SaveResult, Startup } from '../../../src/core/project/ipc-contract.ts';
+import type { CoppiceBridge, GraphLink, OpenedFile } from '../../../src/core/project/ipc-contract.ts';
 
-export interface Platform {
+/** What the renderer may ask of its host: the desktop bridge's functions, or their browser fallbacks. */
+export interface Platform extends Omit<CoppiceBridge, 'platform'> {
   readonly kind: 'desktop' | 'browser';
-  startup(): Promise<Startup>;
-  openProject(): Promise<OpenedFile | null>;
-  /** The path written, null when cancelled, or a conflict (the file changed on disk; desktop only). */
-  saveProject(req: SaveRequest): Promise<SaveResult>;
-  saveProjectAs(req: SaveRequest): Promise<SaveResult>;
-  exportFile(req: ExportRequest): Promise<string | null>;
-  recentFiles(): Promise<readonly string[]>;
-  openRecent(path: string): Promise<OpenedFile | null>;
-  revealInFolder(path: string): Promise<void>;
-  autosave(text: string | null): Promise<void>;
-  setDirty(dirty: boolean): void;
-  onMenuCommand(listener: (cmd: MenuCommand) => void): () => void;
-  onOpenLink(listener: (link: GraphLink) => void): () => void;
-  onOpenFile(listener: (file: OpenedFile) => void): () => void;
 }
 
 export const RECOVERY_KEY = 'coppice.recovery';
