@@ -13,7 +13,7 @@ import { loopsOf, type PropIntegral } from '../integrals/prop-integral.ts';
 import type { Scheme } from '../schemes/scheme.ts';
 import { neverCancel, type CancelToken } from '../util/cancel.ts';
 import { infraredDivergence } from './infrared-safety.ts';
-import { infraredSubtractions } from './infrared-rstar.ts';
+import { GeneralRStar } from './general-rstar.ts';
 import { glueAndCut } from './glue-and-cut.ts';
 import { loopNumber } from '../graph/connectivity.ts';
 import { atReferencePoint, isLocal, logCoefficient, type ScalingTerm } from './momentum-series.ts';
@@ -54,6 +54,8 @@ export interface EngineOptions {
 export class CountertermEngine {
   readonly algebra: HopfAlgebra;
   readonly evaluator: IntegralEvaluator;
+  /** The infrared R-operation with its own memo of UV and IR counterterms of scalar graphs. */
+  readonly rstar: GeneralRStar;
   private readonly memo = new Map<string, CountertermValue>();
   private readonly cancel: CancelToken;
 
@@ -65,6 +67,7 @@ export class CountertermEngine {
     this.algebra = new HopfAlgebra(theory, unlabelledLegsClassifier);
     this.cancel = opts.cancel ?? neverCancel;
     this.evaluator = new IntegralEvaluator({ D0: theory.dimension, loopFactor: (k) => scheme.loopFactor(theory.dimension, k), measure: scheme.measure(theory.dimension), cancel: this.cancel });
+    this.rstar = new GeneralRStar(this.evaluator, theory.dimension, this.cancel);
     if (!scheme.minimal) throw new Error('CountertermEngine handles the minimal schemes; use the momentum-subtraction engine for mom');
   }
 
@@ -159,7 +162,7 @@ export class CountertermEngine {
         return null;
       }
       if (!rstar) return `${where}: ${what} is infrared divergent when lines ${ir.softLines.map((k) => k + 1).join(',')} go soft`;
-      const sub = infraredSubtractions(integral, this.theory.dimension);
+      const sub = this.rstar.subtract(integral);
       if (!sub.ok) return `${where}: ${what}: ${sub.reason}`;
       for (const t of sub.terms) {
         pieces.push({ coefficient: coefficient.mul(t.coefficient), integral: t.integral });
