@@ -68,14 +68,15 @@ export function runValues(args: ParsedArgs, io: CliIO): number {
       const ren = renormalizedValue(ct.detail.subtracted, ct.value, bg.graph.edges.length);
       const rg = checkRgPoles(engine, a, ct.value);
       const routing = ct.detail.routing ? [rep.graph.vertices[ct.detail.routing.u]!.name, rep.graph.vertices[ct.detail.routing.v]!.name] : null;
-      failed = !ren.finite || !ct.detail.local || !ct.detail.routingsAgree || (rg.checked && !rg.consistent);
+      const poleOnly = ct.detail.poleOnly;
+      failed = (!poleOnly && !ren.finite) || !ct.detail.local || !ct.detail.routingsAgree || (rg.checked && !rg.consistent);
       tex = {
         counterterm: ct.value,
-        subtracted: atReferencePoint(ct.detail.subtracted),
-        renormalized: ren.coefficients,
+        subtracted: poleOnly ? null : atReferencePoint(ct.detail.subtracted),
+        renormalized: poleOnly ? null : ren.coefficients,
         method: ct.detail.method,
         checks: [
-          { label: 'finite', status: status(ren.finite), detail: 'φ_R = R̄Γ + S_R(Γ) has no poles' },
+          poleOnly ? { label: 'finite', status: 'unchecked', detail: poleOnly } : { label: 'finite', status: status(ren.finite), detail: 'φ_R = R̄Γ + S_R(Γ) has no poles' },
           { label: 'local', status: status(ct.detail.local), detail: 'no ln(p²/μ²) in the pole part' },
           { label: 'routings agree', status: ct.detail.routingsCompared > 1 ? status(ct.detail.routingsAgree) : 'unchecked', detail: `${ct.detail.routingsCompared} compared` },
           { label: 'RG poles', status: rg.checked ? status(rg.consistent) : 'unchecked', detail: rg.reason ?? 'higher poles from the simple ones' },
@@ -83,8 +84,9 @@ export function runValues(args: ParsedArgs, io: CliIO): number {
       };
       report = {
         scheme: scheme.name, evaluable: true, method: ct.detail.method, routing, routingsCompared: ct.detail.routingsCompared,
-        counterterm: seriesJSON(ct.value, -1), finite: ren.finite, local: ct.detail.local, routingsAgree: ct.detail.routingsAgree,
-        renormalized: Object.fromEntries(ren.coefficients.map((c, j) => [String(j), formatPoly(c)])),
+        counterterm: seriesJSON(ct.value, -1), finite: poleOnly ? null : ren.finite, local: ct.detail.local, routingsAgree: ct.detail.routingsAgree,
+        renormalized: poleOnly ? null : Object.fromEntries(ren.coefficients.map((c, j) => [String(j), formatPoly(c)])),
+        ...(poleOnly ? { poleOnly } : {}),
         rgConsistent: rg.checked ? rg.consistent : null,
       };
     }

@@ -234,8 +234,8 @@ export function runValues(req: ValuesJob, cancel: CancelToken = neverCancel, pro
   const rep = engine.algebra.representative(ownClass);
   const routing = ct.detail.routing ? ([rep.graph.vertices[ct.detail.routing.u]!.name, rep.graph.vertices[ct.detail.routing.v]!.name] as const) : null;
 
-  if (suppliedForGraph) {
-    const why = 'Γ\'s own counterterm was entered by hand: nothing to check it against';
+  if (suppliedForGraph || ct.detail.poleOnly) {
+    const why = ct.detail.poleOnly ?? 'Γ\'s own counterterm was entered by hand: nothing to check it against';
     checks.push(
       { id: 'finite', label: 'finite', status: 'unchecked', detail: why },
       { id: 'local', label: 'local', status: 'unchecked', detail: why },

@@ -15,6 +15,8 @@ import { neverCancel, type CancelToken } from '../util/cancel.ts';
 import { infraredDivergence } from './infrared-safety.ts';
 import { GeneralRStar } from './general-rstar.ts';
 import { glueAndCut } from './glue-and-cut.ts';
+import { laplacianCounterterm } from './momentum-laplacian.ts';
+import { omegaOfGraph } from '../theory/power-counting.ts';
 import { loopNumber } from '../graph/connectivity.ts';
 import { atReferencePoint, isLocal, logCoefficient, type ScalingTerm } from './momentum-series.ts';
 import { routedIntegral } from './routed-integral.ts';
@@ -35,6 +37,11 @@ export interface EvaluationDetail {
   /** R̄Γ term by term with its momentum scaling (p²)^{−lε}. */
   readonly subtracted: readonly ScalingTerm[];
   readonly local: boolean;
+  /**
+   * Set when the method yields the counterterm only, not R̄Γ on the true kinematics: `subtracted`
+   * then holds −S_R alone, and finiteness and the renormalized value cannot be read from it.
+   */
+  readonly poleOnly?: string;
 }
 
 export interface EngineOptions {
@@ -130,11 +137,15 @@ export class CountertermEngine {
     // the value when no routing works, and a second method when fewer than `want` routings did.
     const glued = a.subgraphs.length === 0 && found.length < want ? glueAndCut(a, this.evaluator, this.theory.dimension) : null;
     if (found.length === 0) {
+      const box = omegaOfGraph(bg) === 2 && bg.graph.legs.length === 2 ? laplacianCounterterm(a, this.theory.dimension, this.rstar, want) : null;
+      if (box?.ok) {
+        return { ok: true, value: box.value, detail: { routing: null, routingsCompared: box.routingsCompared, routingsAgree: box.routingsAgree, method: box.method, subtracted: [{ loops: loopNumber(bg.graph), value: box.value.neg() }], local: true, poleOnly: 'the □_p route gives the pole part only: R̄Γ on the true kinematics is what could not be evaluated' } };
+      }
       if (glued?.ok) {
         const name = (e: number) => `${bg.graph.vertices[bg.graph.edges[e]!.a]!.name}-${bg.graph.vertices[bg.graph.edges[e]!.b]!.name}`;
         return { ok: true, value: glued.value, detail: { routing: null, routingsCompared: 1, routingsAgree: true, method: `glue-and-cut: the period from the finite integral with line ${glued.line + 1} (${name(glued.line)}) cut`, subtracted: [{ loops: loopNumber(bg.graph), value: glued.value.neg() }], local: true } };
       }
-      return { ok: false, reason: `no routing of the external momentum is both infrared safe and evaluable; ${summarize(reasons)}${glued && !glued.ok ? `; glue-and-cut: ${glued.reason}` : ''}` };
+      return { ok: false, reason: `no routing of the external momentum is both infrared safe and evaluable; ${summarize(reasons)}${glued && !glued.ok ? `; glue-and-cut: ${glued.reason}` : ''}${box && !box.ok ? `; □_p: ${box.reason}` : ''}` };
     }
     const first = found[0]!;
     const values = [...found.map((f) => f.value), ...(glued?.ok ? [glued.value] : [])];

@@ -151,6 +151,27 @@ export class GeneralRStar {
     });
   }
 
+  /**
+   * Z(g) on up to `want` routings, for cross-checks: the value of the first, how many were
+   * compared and whether they agree (throws NotEvaluable when none works).
+   */
+  uvCountertermCompared(g: ScalarGraph, want: number): { value: Series; compared: number; agree: boolean } {
+    const values: Series[] = [];
+    const reasons: string[] = [];
+    const verts = [...touchedVertices(g.lines)].sort((a, b) => a - b);
+    for (let i = 0; i < verts.length && values.length < want; i++) for (let j = i + 1; j < verts.length && values.length < want; j++) {
+      try {
+        values.push(this.uvCountertermOnRouting(g, verts[i]!, verts[j]!));
+      } catch (e) {
+        if (!(e instanceof NotEvaluable)) throw e;
+        reasons.push(e.message);
+      }
+    }
+    if (values.length === 0) throw new NotEvaluable(`no routing gives the UV counterterm of a ${loopsOfLines(g.lines)}-loop scalar graph (${reasons[0] ?? 'no two vertices'})`);
+    const agree = values.every((v) => v.sub(values[0]!).isZero());
+    return { value: values[0]!, compared: values.length, agree };
+  }
+
   /** −K R*g with the momentum in at u and out at v (throws NotEvaluable); for cross-checks. */
   uvCountertermOnRouting(g: ScalarGraph, u: number, v: number): Series {
     this.cancel.throwIfCancelled();

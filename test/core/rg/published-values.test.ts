@@ -117,6 +117,42 @@ describe('second route for γ_{m²} and γ_φ: critical exponents through ε² �
   }
 });
 
+describe('single-component φ⁴ at four loops (MS)', () => {
+  let four: RgComputation;
+  beforeAll(() => {
+    four = computeRg(builtinTheory('phi4'), { loops: 4, scheme: 'ms' });
+  }, 120_000);
+  it('every graph through four loops is evaluable (the two stuck self-energies by □_p and the general R*); the RG pole relations hold', () => {
+    expect(four.notEvaluable).toEqual([]);
+    expect(report(four).checks).toEqual({ rgConsistent: true, failures: [] });
+  });
+  it('γ_φ at g⁴ = 65/192 — REFERENCES.md, [KSF] ch. 11', () => {
+    same(at(four, 'gammaField', 4), '65/192');
+  });
+  it('β at g⁵ = −(3499/48 + 78ζ(3) − 18ζ(4) + 120ζ(5)), ζ(4) = π⁴/90 — from memory ([KSF] ch. 11; Phys. Lett. B272 (1991) 39, hep-th/9503230), cross-checked below', () => {
+    same(at(four, 'beta', 5), '-3499/48 - 78*zeta(3) + 1/5*pi^4 - 120*zeta(5)');
+  });
+  it('second route: η through ε\'⁴ from the computed β and γ_φ equals the O(N) formula at N = 1 (from memory, [KSF] ch. 17)', () => {
+    // η = (N+2)ε'²/(2(N+8)²) · [1 + (−N² + 56N + 272)ε'/(4(N+8)²)
+    //      + (−5N⁴ − 230N³ + 1124N² + 17920N + 46144 − 384ζ(3)(N+8)(5N+22))ε'²/(16(N+8)⁴)], at N = 1:
+    // 1/54, 109/5832, (64953 − 93312ζ(3))/(54·104976). Computed here from g* of β through g⁴ and γ_φ through g⁴.
+    const b = [2, 3, 4].map((k) => at(four, 'beta', k));
+    const f = [2, 3, 4].map((k) => at(four, 'gammaField', k));
+    // g* = x1 ε' + x2 ε'² + x3 ε'³ from −ε' + b2 g + b3 g² + b4 g³ = 0.
+    const inv = Rational.ONE.div(b[0]!.asRational()!);
+    const x1 = Poly.constant(inv);
+    const x2 = b[1]!.mul(x1).mul(x1).scale(inv).neg();
+    const x3 = b[1]!.mul(x1).mul(x2).scale(Rational.int(2)).add(b[2]!.mul(x1).mul(x1).mul(x1)).scale(inv).neg();
+    // η = 2γ_φ(g*) = 2[f2 g*² + f3 g*³ + f4 g*⁴].
+    const eta2 = f[0]!.mul(x1).mul(x1).scale(Rational.int(2));
+    const eta3 = f[0]!.mul(x1).mul(x2).scale(Rational.int(2)).add(f[1]!.mul(x1).mul(x1).mul(x1)).scale(Rational.int(2));
+    const eta4 = f[0]!.mul(x2.mul(x2).add(x1.mul(x3).scale(Rational.int(2)))).add(f[1]!.mul(x1).mul(x1).mul(x2).scale(Rational.int(3))).add(f[2]!.mul(x1).mul(x1).mul(x1).mul(x1)).scale(Rational.int(2));
+    same(eta2, '1/54');
+    same(eta3, '109/5832');
+    same(eta4, '(64953 - 93312*zeta(3))/(54*104976)');
+  });
+});
+
 describe('loop orders', () => {
   it('--loops L gives β through g^{L+1}, γ_φ and γ_{m²} through g^L', () => {
     const r: RgReport = report(computeRg(builtinTheory('phi4'), { loops: 2, scheme: 'ms' }));
