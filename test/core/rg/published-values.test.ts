@@ -153,6 +153,21 @@ describe('single-component φ⁴ at four loops (MS)', () => {
   });
 });
 
+describe('O(N) φ⁴ at four loops (MS)', () => {
+  let four: RgComputation;
+  beforeAll(() => {
+    four = computeRg(builtinTheory('phi4-on'), { loops: 4, scheme: 'ms' });
+  }, 120_000);
+  it('γ_φ at g⁴ = 5(N+2)(−N² + 18N + 100)/5184 — from memory ([KSF] ch. 11, [KP]); N = 1 is REFERENCES.md\'s 65/192', () => {
+    same(at(four, 'gammaField', 4), '5*(N+2)*(-N^2 + 18*N + 100)/5184');
+  });
+  it('β at g⁵, the part without zeta values: (5N³ − 6320N² − 80456N − 196648)/3888 — from memory ([KSF] ch. 11); N = 1 is −3499/48 as above', () => {
+    const b5 = at(four, 'beta', 5);
+    const rational = Poly.fromTerms(b5.terms().filter((t) => (t.mono as Monomial).factors.every((f) => f.name === 'N')));
+    same(rational, '(5*N^3 - 6320*N^2 - 80456*N - 196648)/3888');
+  });
+});
+
 describe('loop orders', () => {
   it('--loops L gives β through g^{L+1}, γ_φ and γ_{m²} through g^L', () => {
     const r: RgReport = report(computeRg(builtinTheory('phi4'), { loops: 2, scheme: 'ms' }));
