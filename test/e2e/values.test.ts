@@ -41,6 +41,22 @@ describe.skipIf(!haveChromium && !process.env.CI)('values and theory runs in Chr
     expect(errors).toEqual([]);
   });
 
+  it('a four-loop self-energy reached by □_p: the counterterm, its RG check, and finiteness marked unchecked (pole part only)', async () => {
+    const { page, errors } = await openApp(h, link('1-2 1-3 1-4 2-3 2-4 3-4 3-4 / 1 2'));
+    await page.getByTestId('tab-values').click();
+    await page.getByTestId('scheme-select').selectOption('ms');
+    await page.getByTestId('evaluate').click();
+    const ct = page.getByTestId('values-counterterm');
+    await expect.poll(() => ct.getAttribute('data-text'), { timeout: 30_000 }).toBe('(1/24)*eps^-3 + (-7/48)*eps^-2 + (13/96)*eps^-1');
+    expect(await page.getByTestId('values-method').textContent()).toMatch(/□_p/);
+    expect(await page.getByTestId('finite-check').getAttribute('data-status')).toBe('unchecked');
+    expect(await page.getByTestId('rg-check').getAttribute('data-status')).toBe('pass');
+    expect(await page.getByTestId('routings-check').getAttribute('data-status')).toBe('pass');
+    await page.setViewportSize({ width: 1400, height: 1300 });
+    await page.screenshot({ path: `${screenshotDir}/panel-values-box-p.png` });
+    expect(errors).toEqual([]);
+  });
+
   it('computes a primitive graph\'s period in the worker and uses −P/(Lε)', async () => {
     const { page, errors } = await openApp(h, link(WHEEL3));
     await page.getByTestId('tab-values').click();

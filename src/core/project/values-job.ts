@@ -236,10 +236,13 @@ export function runValues(req: ValuesJob, cancel: CancelToken = neverCancel, pro
 
   if (suppliedForGraph || ct.detail.poleOnly) {
     const why = ct.detail.poleOnly ?? 'Γ\'s own counterterm was entered by hand: nothing to check it against';
+    const compared = ct.detail.poleOnly && ct.detail.routingsCompared >= 2;
     checks.push(
       { id: 'finite', label: 'finite', status: 'unchecked', detail: why },
       { id: 'local', label: 'local', status: 'unchecked', detail: why },
-      { id: 'routings', label: 'routings agree', status: 'unchecked', detail: why },
+      compared
+        ? { id: 'routings', label: 'routings agree', status: ct.detail.routingsAgree ? 'pass' : 'fail', detail: `each logarithmic graph of the route on ${ct.detail.routingsCompared} routings${ct.detail.routingsAgree ? '' : ': their counterterms differ'}` }
+        : { id: 'routings', label: 'routings agree', status: 'unchecked', detail: why },
     );
   } else {
     progress?.(0.8, 'checks');
