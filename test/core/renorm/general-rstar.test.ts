@@ -131,6 +131,35 @@ describe('□_p for two-point graphs', () => {
     expect({ compared, newly }).toEqual({ compared: 3, newly: 2 });
   });
 
+  it('φ³ in six dimensions (□_p 1/q² = (−4 + 4ε)/q⁴): two-point graphs through three loops, every path agrees with the direct value', { timeout: 300_000 }, () => {
+    const phi3 = builtinTheory('phi3');
+    const engine = new CountertermEngine(phi3, schemeOf('ms'));
+    let compared = 0;
+    let newly = 0;
+    for (const loops of [1, 2, 3]) {
+      for (const g of generateGraphs(phi3, { residue: ['phi', 'phi'], loops }).graphs) {
+        const bg = bindGraph(g.graph, phi3);
+        const a = engine.algebra.analyze(engine.algebra.representative(engine.algebra.classOf(bg)));
+        const setup = laplacianSetup(a, 6);
+        if (!setup.ok) continue;
+        const values = new Set<string>();
+        for (const path of setup.paths) {
+          const r = laplacianOnPath(setup.graph, setup.s, setup.t, path, 6, engine.rstar, 2);
+          if (r.ok) values.add(text(r.value));
+        }
+        if (values.size === 0) continue;
+        const direct = engine.counterterm(bg);
+        if (direct.ok && !direct.detail.poleOnly) {
+          values.add(text(direct.value));
+          compared++;
+        } else newly++;
+        expect(values.size, `${g.notation}: ${[...values].join(' | ')}`).toBe(1);
+      }
+    }
+    // Compared: the one-loop bubble (REFERENCES.md: φ³ bubble 1/(6ε)) and a two-loop graph; one three-loop graph is new.
+    expect({ compared, newly }).toEqual({ compared: 2, newly: 1 });
+  });
+
   it('the doubled line as a theory graph (a mass insertion) has the same counterterm through the Hopf-algebra engine as through the scalar R*', () => {
     const engine = new CountertermEngine(phi4, schemeOf('ms'), { compareRoutings: 3 });
     const viaTheory = engine.counterterm(bindGraph(parseNotation('1-c{phi,phi;m2} c-2 1-3 1-4 2-3 2-4 3-4 3-4 / 1 2'), phi4));
