@@ -9,7 +9,7 @@ import { neverCancel, type CancelToken } from '../util/cancel.ts';
 import { mergeChains } from './merge-chains.ts';
 import type { SoftRegion } from './infrared-safety.ts';
 import { dualGraph, infraredSpinneys, infraredSubgraphs, uvSpinneys, uvSubgraphs, type UvSubgraph } from './rstar-subgraphs.ts';
-import { contractGroups, linesVertexIrreducible, loopsOfLines, scalarGraphKey, subgraphOfLines, touchedVertices, uvDegree, type ScalarGraph } from './scalar-graph.ts';
+import { contractGroups, linesVertexIrreducible, loopsOfLines, piecesAround, scalarGraphKey, subgraphOfLines, touchedVertices, uvDegree, type ScalarGraph } from './scalar-graph.ts';
 
 /** One term of R̃ applied to an integral: Π Z̃ over the soft subgraphs deleted, times what is left. */
 export interface InfraredTerm {
@@ -224,20 +224,8 @@ export class GeneralRStar {
 function splitAtCutVertex(g: ScalarGraph): number[][] | null {
   if (linesVertexIrreducible(g.lines)) return null;
   for (const x of touchedVertices(g.lines)) {
-    const parent = g.lines.map((_, k) => k);
-    const find = (k: number): number => (parent[k] === k ? k : (parent[k] = find(parent[k]!)));
-    const byVertex = new Map<number, number>();
-    g.lines.forEach((l, k) => {
-      for (const y of [l.u, l.v]) {
-        if (y === x) continue;
-        const o = byVertex.get(y);
-        if (o === undefined) byVertex.set(y, k);
-        else parent[find(k)] = find(o);
-      }
-    });
-    const groups = new Map<number, number[]>();
-    g.lines.forEach((_, k) => groups.set(find(k), [...(groups.get(find(k)) ?? []), k]));
-    if (groups.size > 1) return [...groups.values()];
+    const pieces = piecesAround(g.lines, x);
+    if (pieces.length > 1) return pieces;
   }
   return null;
 }

@@ -43,7 +43,7 @@ export type LaplacianResult = { ok: true; value: Series; method: string; routing
  * with S(G_i) = −K R* G_i by infrared rearrangement on any routing (general-rstar.ts).
  */
 export function laplacianCounterterm(a: GraphAnalysis, D0: number, rstar: GeneralRStar, compare = 2): LaplacianResult {
-  const setup = laplacianSetup(a, D0);
+  const setup = laplacianSetup(a);
   if (!setup.ok) return setup;
   const reasons: string[] = [];
   for (const path of setup.paths) {
@@ -55,7 +55,7 @@ export function laplacianCounterterm(a: GraphAnalysis, D0: number, rstar: Genera
 }
 
 /** The scalar graph of a two-point graph, its legs' vertices and the paths of one or two lines between them. */
-export function laplacianSetup(a: GraphAnalysis, D0: number): { ok: true; graph: ScalarGraph; s: number; t: number; paths: number[][] } | { ok: false; reason: string } {
+export function laplacianSetup(a: GraphAnalysis): { ok: true; graph: ScalarGraph; s: number; t: number; paths: number[][] } | { ok: false; reason: string } {
   const bg = a.bound;
   const g = bg.graph;
   if (g.legs.length !== 2 || omegaOfGraph(bg) !== 2) return { ok: false, reason: 'the □_p route applies to quadratically divergent two-point graphs' };

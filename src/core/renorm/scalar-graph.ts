@@ -64,6 +64,11 @@ export function linesVertexIrreducible(lines: readonly PropLine[]): boolean {
 
 /** Whether removing vertex x splits the lines into more than one piece (a self-loop at x is a piece). */
 export function isCutVertex(lines: readonly PropLine[], x: number): boolean {
+  return piecesAround(lines, x).length > 1;
+}
+
+/** The lines (indices) grouped into the pieces that stay connected when vertex x is removed. */
+export function piecesAround(lines: readonly PropLine[], x: number): number[][] {
   // Lines joined when they share a vertex other than x.
   const parent = lines.map((_, k) => k);
   const find = (k: number): number => (parent[k] === k ? k : (parent[k] = find(parent[k]!)));
@@ -76,7 +81,9 @@ export function isCutVertex(lines: readonly PropLine[], x: number): boolean {
       else parent[find(k)] = find(o);
     }
   });
-  return new Set(lines.map((_, k) => find(k))).size > 1;
+  const groups = new Map<number, number[]>();
+  lines.forEach((_, k) => groups.set(find(k), [...(groups.get(find(k)) ?? []), k]));
+  return [...groups.values()];
 }
 
 export function touchedVertices(lines: readonly PropLine[]): Set<number> {

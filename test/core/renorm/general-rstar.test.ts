@@ -91,7 +91,7 @@ describe('□_p for two-point graphs', () => {
   it('the sunset: □_p with one line doubled gives the direct value 1/(4ε)', () => {
     const engine = new CountertermEngine(phi4, schemeOf('ms'));
     const a = engine.algebra.analyze(bindGraph(parseNotation('1-2 1-2 1-2 / 1 2'), phi4));
-    const setup = laplacianSetup(a, 4);
+    const setup = laplacianSetup(a);
     if (!setup.ok) throw new Error(setup.reason);
     const r = laplacianOnPath(setup.graph, setup.s, setup.t, setup.paths[0]!, 4, engine.rstar, 2);
     expect(r.ok && text(r.value)).toBe('(1/4)*eps^-1');
@@ -107,7 +107,7 @@ describe('□_p for two-point graphs', () => {
       for (const g of generateGraphs(phi4, { residue: ['phi', 'phi'], loops }).graphs) {
         const bg = bindGraph(g.graph, phi4);
         const a = engine.algebra.analyze(engine.algebra.representative(engine.algebra.classOf(bg)));
-        const setup = laplacianSetup(a, 4);
+        const setup = laplacianSetup(a);
         if (!setup.ok) continue; // e.g. legs on one vertex
         const values = new Set<string>();
         for (const path of setup.paths) {
@@ -140,7 +140,7 @@ describe('□_p for two-point graphs', () => {
       for (const g of generateGraphs(phi3, { residue: ['phi', 'phi'], loops }).graphs) {
         const bg = bindGraph(g.graph, phi3);
         const a = engine.algebra.analyze(engine.algebra.representative(engine.algebra.classOf(bg)));
-        const setup = laplacianSetup(a, 6);
+        const setup = laplacianSetup(a);
         if (!setup.ok) continue;
         const values = new Set<string>();
         for (const path of setup.paths) {
