@@ -18,6 +18,9 @@ Without --symbolic: the counterterm S_R(Γ) of the graph alone (no coupling, sig
 group factor; for two-point graphs the coefficient of p²) as an exact Laurent series in ε, with
 the renormalized value as a polynomial in ln(p²/μ²) and the checks: finiteness, locality,
 routing independence and (minimal schemes) the renormalization-group pole relations.
+Infrared-unsafe routings are made usable by the infrared R*; a two-point graph whose integral is
+stuck goes through □_p (the method says so): then only the pole part is known, and the JSON has
+"finite": null, "renormalized": null and "poleOnly" with the reason.
 Schemes: ms (d^Dk/π^{D/2} per loop), msbar (× e^{γε} per loop), g (per-loop normalization
 making the one-loop log-divergent propagator integral exactly 1/ε), mom (momentum subtraction).
 

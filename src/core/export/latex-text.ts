@@ -20,7 +20,7 @@ const SPECIAL: Record<string, string> = {
 
 const MATH_SYMBOL: Record<string, string> = {
   α: '\\alpha', β: '\\beta', γ: '\\gamma', δ: '\\delta', ε: '\\varepsilon', λ: '\\lambda', μ: '\\mu',
-  π: '\\pi', φ: '\\phi', ψ: '\\psi', ζ: '\\zeta', Γ: '\\Gamma', Δ: '\\Delta', ω: '\\omega',
+  π: '\\pi', Σ: '\\Sigma', '□': '\\square', φ: '\\phi', ψ: '\\psi', ζ: '\\zeta', Γ: '\\Gamma', Δ: '\\Delta', ω: '\\omega',
   '·': '\\cdot', '×': '\\times', '⊗': '\\otimes', '≤': '\\le', '≥': '\\ge', '→': '\\to',
   '⁰': '^0', '¹': '^1', '²': '^2', '³': '^3', '⁴': '^4', '⁵': '^5', '⁶': '^6',
 };

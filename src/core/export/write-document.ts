@@ -46,6 +46,7 @@ export function documentPreamble(extra: readonly string[] = []): string[] {
     '\\documentclass[10pt]{article}',
     '\\usepackage[margin=2cm]{geometry}',
     '\\usepackage{amsmath}',
+    '\\usepackage{amssymb}',
     '\\usepackage{longtable}',
     '\\usepackage{tikz}',
     `\\usetikzlibrary{${tikzLibraries.join(',')}}`,
