@@ -2,6 +2,7 @@ import { Poly } from '../algebra/polynomial.ts';
 import { polePart } from '../algebra/pole-part.ts';
 import { Rational } from '../algebra/rational.ts';
 import { Series } from '../algebra/series.ts';
+import { LimitError } from '../errors.ts';
 import { IntegralEvaluator, NotEvaluable } from '../integrals/evaluate-integral.ts';
 import { indexText, type LineIndex } from '../integrals/line-index.ts';
 import type { PropIntegral } from '../integrals/prop-integral.ts';
@@ -61,7 +62,8 @@ export class GeneralRStar {
     try {
       return { ok: true, ...this.rtilde(I) };
     } catch (e) {
-      if (e instanceof NotEvaluable) return { ok: false, reason: e.message };
+      // Too large for subsets of lines: this routing is out of reach, others may not be.
+      if (e instanceof NotEvaluable || e instanceof LimitError) return { ok: false, reason: e.message };
       throw e;
     }
   }

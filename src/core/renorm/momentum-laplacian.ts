@@ -2,6 +2,7 @@ import { Poly } from '../algebra/polynomial.ts';
 import { polePart } from '../algebra/pole-part.ts';
 import { Rational } from '../algebra/rational.ts';
 import { Series } from '../algebra/series.ts';
+import { LimitError } from '../errors.ts';
 import { inverse } from '../algebra/series-inverse.ts';
 import type { GraphAnalysis } from '../hopf/hopf-algebra.ts';
 import { NotEvaluable } from '../integrals/evaluate-integral.ts';
@@ -98,7 +99,7 @@ export function laplacianOnPath(G: ScalarGraph, s: number, t: number, path: read
       routingsAgree: agree,
     };
   } catch (e) {
-    if (!(e instanceof NotEvaluable)) throw e;
+    if (!(e instanceof NotEvaluable) && !(e instanceof LimitError)) throw e;
     return { ok: false, reason: `along lines ${path.map((k) => k + 1).join(',')}: ${e.message}` };
   }
 }

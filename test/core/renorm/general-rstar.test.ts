@@ -59,6 +59,18 @@ describe('infrared counterterms of multi-line soft subgraphs', () => {
   });
 });
 
+describe('limits', () => {
+  it('an integral too large for soft regions by subsets: R* declines that routing with the limit named, nothing thrown', () => {
+    const engine = new CountertermEngine(phi4, schemeOf('ms'));
+    // A chain of 11 bubbles from s to t: 22 lines.
+    const lines: PropLine[] = [];
+    for (let k = 0; k < 11; k++) lines.push(line(k, k + 1), line(k, k + 1));
+    const r = engine.rstar.subtract({ vertexCount: 12, s: 0, t: 11, lines });
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.reason).toMatch(/maxSoftRegionLines/);
+  });
+});
+
 describe('every routing made usable by R* agrees', () => {
   for (const loops of [2, 3, 4]) {
     it(`φ⁴ four-point graphs with ${loops} loops: all usable routings give one local counterterm per graph`, { timeout: 300_000 }, () => {
