@@ -46,8 +46,8 @@ export function infraredRegions(I: PropIntegral, D0: number, firstOnly = false):
   const found: SoftRegion[] = [];
   const masks = [...Array(1 << E).keys()].slice(1).sort((x, y) => popcount(x) - popcount(y));
   for (const S of masks) {
-    const r = softRegion(I, S, D0);
-    if (r && r.degree <= 0) {
+    const r = softRegion(I, S, D0, true);
+    if (r) {
       found.push(r);
       if (firstOnly) return found;
     }
@@ -55,15 +55,47 @@ export function infraredRegions(I: PropIntegral, D0: number, firstOnly = false):
   return found;
 }
 
-/** The region where the lines of bit mask S go soft, or null when S is not a region (hard part not carrying p). */
-export function softRegion(I: PropIntegral, S: number, D0: number): SoftRegion | null {
+/**
+ * The region where the lines of bit mask S go soft, or null when S is not a region (hard part not
+ * carrying p, or a hard bridge) — or, with `divergentOnly`, when it does not diverge. The cheap
+ * counting comes first: most subsets fail it, and the dual graph is built only for the rest.
+ */
+export function softRegion(I: PropIntegral, S: number, D0: number, divergentOnly = false): SoftRegion | null {
   const E = I.lines.length;
-  const parent = Array.from({ length: I.vertexCount }, (_, i) => i);
-  const find = (x: number): number => (parent[x] === x ? x : (parent[x] = find(parent[x]!)));
+  const n = I.vertexCount;
+  const parent = new Int32Array(n);
+  for (let i = 0; i < n; i++) parent[i] = i;
+  const find = (x: number): number => {
+    while (parent[x] !== x) x = parent[x] = parent[parent[x]!]!;
+    return x;
+  };
   for (let k = 0; k < E; k++) if (!(S & (1 << k))) parent[find(I.lines[k]!.u)] = find(I.lines[k]!.v);
   const hardRoot = find(I.s);
   if (find(I.t) !== hardRoot) return null; // the hard lines must carry p from s to t
   for (let k = 0; k < E; k++) if (!(S & (1 << k)) && find(I.lines[k]!.u) !== hardRoot) return null; // a hard piece without external momentum
+  // Loops of the soft lines with the hard part contracted: L = E_S − (merges among their ends).
+  const p2 = new Int32Array(n);
+  for (let i = 0; i < n; i++) p2[i] = i;
+  const f2 = (x: number): number => {
+    while (p2[x] !== x) x = p2[x] = p2[p2[x]!]!;
+    return x;
+  };
+  let soft = 0;
+  let merges = 0;
+  let weight = 0;
+  for (let k = 0; k < E; k++) {
+    if (!(S & (1 << k))) continue;
+    soft++;
+    weight += 2 * I.lines[k]!.index.a;
+    const a = f2(find(I.lines[k]!.u));
+    const b = f2(find(I.lines[k]!.v));
+    if (a !== b) {
+      p2[a] = b;
+      merges++;
+    }
+  }
+  const degree = D0 * (soft - merges) - weight;
+  if (divergentOnly && degree > 0) return null;
   if (hasHardBridge(I, S)) return null;
   const hardTouched = new Set<number>([I.s, I.t]);
   for (let k = 0; k < E; k++) if (!(S & (1 << k))) hardTouched.add(I.lines[k]!.u).add(I.lines[k]!.v);
@@ -75,47 +107,44 @@ export function softRegion(I: PropIntegral, S: number, D0: number): SoftRegion |
     return i + 1;
   };
   const dualLines: { u: number; v: number; line: number }[] = [];
-  let weight = 0;
-  for (let k = 0; k < E; k++) {
-    if (!(S & (1 << k))) continue;
-    const l = I.lines[k]!;
-    weight += 2 * l.index.a;
-    dualLines.push({ u: dualOf(l.u), v: dualOf(l.v), line: k });
-  }
-  const loops = dualLoops(1 + interior.length, dualLines);
-  return { softLines: dualLines.map((d) => d.line), degree: D0 * loops - weight, interior, dualVertexCount: 1 + interior.length, dualLines };
+  for (let k = 0; k < E; k++) if (S & (1 << k)) dualLines.push({ u: dualOf(I.lines[k]!.u), v: dualOf(I.lines[k]!.v), line: k });
+  return { softLines: dualLines.map((d) => d.line), degree, interior, dualVertexCount: 1 + interior.length, dualLines };
 }
 
-/** Whether some hard line (not in S) is a bridge of the hard graph with s and t joined. */
+/** Whether some hard line (not in S) is a bridge of the hard graph with s and t joined (one DFS, Tarjan's low-links). */
 function hasHardBridge(I: PropIntegral, S: number): boolean {
-  const hard = I.lines.map((l, k) => ({ l, k })).filter(({ k }) => !(S & (1 << k)));
-  for (const { l, k } of hard) {
-    if (l.u === l.v) continue;
-    const parent = Array.from({ length: I.vertexCount }, (_, i) => i);
-    const find = (x: number): number => (parent[x] === x ? x : (parent[x] = find(parent[x]!)));
-    parent[find(I.s)] = find(I.t);
-    for (const o of hard) if (o.k !== k) parent[find(o.l.u)] = find(o.l.v);
-    if (find(l.u) !== find(l.v)) return true;
-  }
-  return false;
-}
-
-function dualLoops(n: number, lines: readonly { u: number; v: number }[]): number {
-  const parent = Array.from({ length: n }, (_, i) => i);
-  const find = (x: number): number => (parent[x] === x ? x : (parent[x] = find(parent[x]!)));
-  const touched = new Set<number>();
-  let merges = 0;
-  for (const l of lines) {
-    touched.add(l.u).add(l.v);
-    const a = find(l.u);
-    const b = find(l.v);
-    if (a !== b) {
-      parent[a] = b;
-      merges++;
+  const adj: { to: number; id: number }[][] = Array.from({ length: I.vertexCount }, () => []);
+  let id = 0;
+  const add = (u: number, v: number) => {
+    if (u === v) {
+      id++;
+      return;
     }
-  }
-  // L = E − V + C over the touched vertices; V − C is the number of successful merges.
-  return lines.length - merges;
+    adj[u]!.push({ to: v, id });
+    adj[v]!.push({ to: u, id });
+    id++;
+  };
+  I.lines.forEach((l, k) => {
+    if (!(S & (1 << k))) add(l.u, l.v);
+  });
+  add(I.s, I.t);
+  const disc = new Array<number>(I.vertexCount).fill(-1);
+  const low = new Array<number>(I.vertexCount).fill(0);
+  let time = 0;
+  let bridge = false;
+  const dfs = (u: number, viaEdge: number): void => {
+    disc[u] = low[u] = time++;
+    for (const { to, id: e } of adj[u]!) {
+      if (e === viaEdge) continue;
+      if (disc[to] === -1) {
+        dfs(to, e);
+        low[u] = Math.min(low[u]!, low[to]!);
+        if (low[to]! > disc[u]!) bridge = true;
+      } else low[u] = Math.min(low[u]!, disc[to]!);
+    }
+  };
+  dfs(I.s, -1);
+  return bridge;
 }
 
 function popcount(x: number): number {
