@@ -72,6 +72,22 @@ describe.skipIf(!haveChromium && !process.env.CI)('values and theory runs in Chr
     expect(errors).toEqual([]);
   });
 
+  it('runs φ⁴ at four loops: every graph evaluable, γ_φ at g⁴ = 65/192 (REFERENCES.md, "Critical Properties of φ⁴-Theories", ch. 11)', async () => {
+    const { page, errors } = await openApp(h, link(SUNSET));
+    await page.getByTestId('tab-theory').click();
+    await page.getByTestId('rg-theory').selectOption('phi4');
+    await page.getByTestId('rg-loops').selectOption('4');
+    await page.getByTestId('rg-scheme').selectOption('ms');
+    await page.getByTestId('rg-run').click();
+    const result = page.getByTestId('rg-result');
+    await expect.poll(() => result.count(), { timeout: 60_000 }).toBe(1);
+    expect(await result.locator('[data-testid=rg-coef-gammaPhi][data-power="4"] code').textContent()).toBe('65/192');
+    expect(await page.getByTestId('rg-consistency').getAttribute('data-status')).toBe('pass');
+    await page.setViewportSize({ width: 1400, height: 1500 });
+    await page.screenshot({ path: `${screenshotDir}/panel-theory-run-4-loops.png` });
+    expect(errors).toEqual([]);
+  });
+
   it('runs φ⁴ at two loops and reads β = −2εg + 3g² − 17/3 g³ from the result', async () => {
     const { page, errors } = await openApp(h, link(SUNSET));
     await page.getByTestId('tab-theory').click();
