@@ -15,6 +15,7 @@ import { neverCancel, type CancelToken } from '../util/cancel.ts';
 import { infraredDivergence } from './infrared-safety.ts';
 import { GeneralRStar } from './general-rstar.ts';
 import { glueAndCut } from './glue-and-cut.ts';
+import { zigzagCounterterm } from './zigzag-period.ts';
 import { laplacianCounterterm } from './momentum-laplacian.ts';
 import { omegaOfGraph } from '../theory/power-counting.ts';
 import { loopNumber } from '../graph/connectivity.ts';
@@ -136,24 +137,30 @@ export class CountertermEngine {
     // Primitive graphs: glue-and-cut gives the counterterm from a finite integral one loop lower —
     // the value when no routing works, and a second method when fewer than `want` routings did.
     const glued = a.subgraphs.length === 0 && found.length < want ? glueAndCut(a, this.evaluator, this.theory.dimension) : null;
+    // Zigzag graphs: their period is known in closed form — a value where nothing else reaches, a check otherwise.
+    const zig = a.subgraphs.length === 0 ? zigzagCounterterm(a, this.theory.dimension) : null;
     if (found.length === 0) {
       const box = omegaOfGraph(bg) === 2 && bg.graph.legs.length === 2 ? laplacianCounterterm(a, this.theory.dimension, this.rstar, want) : null;
       if (box?.ok) {
         return { ok: true, value: box.value, detail: { routing: null, routingsCompared: box.routingsCompared, routingsAgree: box.routingsAgree, method: box.method, subtracted: [{ loops: loopNumber(bg.graph), value: box.value.neg() }], local: true, poleOnly: 'the □_p route gives the pole part only: R̄Γ on the true kinematics is what could not be evaluated' } };
       }
+      if (zig?.ok) {
+        const agree = !glued?.ok || seriesEqual(glued.value, zig.value);
+        return { ok: true, value: zig.value, detail: { routing: null, routingsCompared: glued?.ok ? 2 : 1, routingsAgree: agree, method: `the zigzag period in closed form (Brown–Schnetz, arXiv:1208.1890): S = −P(Z_${zig.loops})/(${zig.loops}ε)${glued?.ok ? '; compared with glue-and-cut' : ''}`, subtracted: [{ loops: loopNumber(bg.graph), value: zig.value.neg() }], local: true, poleOnly: 'a closed-form period gives the pole part only: R̄Γ on the true kinematics was not evaluated' } };
+      }
       if (glued?.ok) {
         const name = (e: number) => `${bg.graph.vertices[bg.graph.edges[e]!.a]!.name}-${bg.graph.vertices[bg.graph.edges[e]!.b]!.name}`;
-        return { ok: true, value: glued.value, detail: { routing: null, routingsCompared: 1, routingsAgree: true, method: `glue-and-cut: the period from the finite integral with line ${glued.line + 1} (${name(glued.line)}) cut`, subtracted: [{ loops: loopNumber(bg.graph), value: glued.value.neg() }], local: true } };
+        return { ok: true, value: glued.value, detail: { routing: null, routingsCompared: 1, routingsAgree: true, method: `glue-and-cut: the period from the finite integral with line ${glued.line + 1} (${name(glued.line)}) cut`, subtracted: [{ loops: loopNumber(bg.graph), value: glued.value.neg() }], local: true, poleOnly: 'glue-and-cut gives the pole part only (the period): R̄Γ on the true kinematics was not evaluated' } };
       }
       return { ok: false, reason: `no routing of the external momentum is both infrared safe and evaluable; ${summarize(reasons)}${glued && !glued.ok ? `; glue-and-cut: ${glued.reason}` : ''}${box && !box.ok ? `; □_p: ${box.reason}` : ''}` };
     }
     const first = found[0]!;
-    const values = [...found.map((f) => f.value), ...(glued?.ok ? [glued.value] : [])];
+    const values = [...found.map((f) => f.value), ...(glued?.ok ? [glued.value] : []), ...(zig?.ok ? [zig.value] : [])];
     const agree = values.every((v) => seriesEqual(v, first.value));
     return {
       ok: true,
       value: first.value,
-      detail: { routing: first.routing, routingsCompared: values.length, routingsAgree: agree, method: first.method + (glued?.ok ? '; cross-checked by glue-and-cut' : ''), subtracted: first.terms, local: first.local },
+      detail: { routing: first.routing, routingsCompared: values.length, routingsAgree: agree, method: first.method + (glued?.ok ? '; cross-checked by glue-and-cut' : '') + (zig?.ok ? '; cross-checked by the zigzag period' : ''), subtracted: first.terms, local: first.local },
     };
   }
 

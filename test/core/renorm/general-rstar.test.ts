@@ -184,3 +184,27 @@ describe('□_p for two-point graphs', () => {
     void Rational;
   });
 });
+
+describe('zigzag periods in closed form (Brown–Schnetz, "Proof of the zig-zag conjecture", arXiv:1208.1890)', () => {
+  it('the formula gives the periods the engine computes itself: 6ζ(3) for Z₃ (K5), 20ζ(5) for Z₄ (the octahedron) — arXiv:0801.2856', async () => {
+    const { zigzagPeriod } = await import('../../../src/core/renorm/zigzag-period.ts');
+    expect(zigzagPeriod(3).equals(Rational.int(6))).toBe(true);
+    expect(zigzagPeriod(4).equals(Rational.int(20))).toBe(true);
+    expect(zigzagPeriod(5).equals(Rational.of(441, 8))).toBe(true);
+    const engine = new CountertermEngine(phi4, schemeOf('ms'), { compareRoutings: 3 });
+    // The wheel with four spokes: its completion is the octahedron C6(1,2); routings, glue-and-cut and the formula agree.
+    const w4 = engine.counterterm(bindGraph(parseNotation('1-2 1-3 1-4 1-5 2-3 3-4 4-5 5-2 / 2 3 4 5'), phi4));
+    if (!w4.ok) throw new Error(w4.reason);
+    expect(w4.detail.method).toMatch(/zigzag/);
+    expect(w4.detail.routingsAgree).toBe(true);
+    expect(text(w4.value)).toBe('(-5*zeta(5))*eps^-1');
+  });
+  it('the five-loop zigzag, out of reach of every reduction here, gets −P(Z₅)/(5ε) = −441/40 ζ(7)/ε', () => {
+    const engine = new CountertermEngine(phi4, schemeOf('ms'));
+    const r = engine.counterterm(bindGraph(parseNotation('1-2 1-3 1-6 2-4 2-5 3-5 3-6 4-5 4-6 5-6 / 1 2 3 4'), phi4));
+    if (!r.ok) throw new Error(r.reason);
+    expect(r.detail.method).toMatch(/zigzag/);
+    expect(r.detail.poleOnly).toBeTruthy();
+    expect(text(r.value)).toBe('(-441/40*zeta(7))*eps^-1');
+  });
+});
