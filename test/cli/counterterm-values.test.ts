@@ -19,6 +19,17 @@ describe('coppice counterterm --scheme', () => {
     expect(j.evaluable).toBe(false);
     expect(j.reason).toMatch(/routing/);
   });
+  it('a four-loop self-energy through □_p: the pole part, with the renormalized value plainly not available (text and JSON)', async () => {
+    const g = '1-3 1-4 1-4 2-3 2-3 2-4 3-4 / 1 2';
+    const text = await cli('counterterm', '--theory', 'phi4', '--scheme', 'ms', '--graph', g);
+    expect(text.code).toBe(0);
+    expect(text.out).toMatch(/counterterm S_R {2}= \(1\/12\) eps\^-3 \+ \(-1\/6\) eps\^-2 \+ \(1\/3\) eps\^-1/);
+    expect(text.out).toMatch(/renormalized {5}not available: the □_p route/);
+    const j = JSON.parse((await cli('counterterm', '--theory', 'phi4', '--scheme', 'ms', '--graph', g, '--json')).out);
+    expect(j).toMatchObject({ evaluable: true, finite: null, renormalized: null, local: true, routingsAgree: true, rgConsistent: true });
+    expect(j.method).toMatch(/□_p/);
+    expect(typeof j.poleOnly).toBe('string');
+  });
   it('fermion theories say plainly that values must be supplied', async () => {
     const j = JSON.parse((await cli('counterterm', '--theory', 'qed', '--scheme', 'msbar', '--graph', '1>2 2>1 / 1 2', '--json')).out);
     expect(j.evaluable).toBe(false);

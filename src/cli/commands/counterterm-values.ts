@@ -121,8 +121,10 @@ function humanValues(r: Record<string, unknown>, theory: string): string {
   const mark = (b: unknown) => (b === true ? 'pass' : b === false ? 'FAIL' : 'not checked');
   return [
     `counterterm S_R  = ${series(r.counterterm as Record<string, string>, 'eps')}    [theory ${theory}, scheme ${r.scheme}]`,
-    `renormalized     = ${series(r.renormalized as Record<string, string>, 'L')}    (L = ln(p²/μ²), at ε = 0${r.routing ? `, momentum routed ${(r.routing as string[]).join('→')}` : ''})`,
+    r.renormalized
+      ? `renormalized     = ${series(r.renormalized as Record<string, string>, 'L')}    (L = ln(p²/μ²), at ε = 0${r.routing ? `, momentum routed ${(r.routing as string[]).join('→')}` : ''})`
+      : `renormalized     not available: ${r.poleOnly ?? 'only the pole part is known'}`,
     `method           ${r.method}`,
-    `checks           finite: ${mark(r.finite)}   local: ${mark(r.local)}   routings agree: ${mark(r.routingsAgree)} (${r.routingsCompared} compared)   RG poles: ${mark(r.rgConsistent)}`,
+    `checks           finite: ${mark(r.finite)}   local: ${mark(r.local)}   routings agree: ${(r.routingsCompared as number) >= 2 ? mark(r.routingsAgree) : 'not checked'} (${r.routingsCompared} compared)   RG poles: ${mark(r.rgConsistent)}`,
   ].join('\n');
 }
