@@ -142,15 +142,16 @@ export class CountertermEngine {
     if (found.length === 0) {
       const box = omegaOfGraph(bg) === 2 && bg.graph.legs.length === 2 ? laplacianCounterterm(a, this.theory.dimension, this.rstar, want) : null;
       if (box?.ok) {
-        return { ok: true, value: box.value, detail: { routing: null, routingsCompared: box.routingsCompared, routingsAgree: box.routingsAgree, method: box.method, subtracted: [{ loops: loopNumber(bg.graph), value: box.value.neg() }], local: true, poleOnly: 'the □_p route gives the pole part only: R̄Γ on the true kinematics is what could not be evaluated' } };
+        return poleOnlyValue(bg, box.value, box.method, box.routingsCompared, box.routingsAgree, 'the □_p route gives the pole part only: R̄Γ on the true kinematics is what could not be evaluated');
       }
       if (zig?.ok) {
         const agree = !glued?.ok || seriesEqual(glued.value, zig.value);
-        return { ok: true, value: zig.value, detail: { routing: null, routingsCompared: glued?.ok ? 2 : 1, routingsAgree: agree, method: `the zigzag period in closed form (Brown–Schnetz, arXiv:1208.1890): S = −P(Z_${zig.loops})/(${zig.loops}ε)${glued?.ok ? '; compared with glue-and-cut' : ''}`, subtracted: [{ loops: loopNumber(bg.graph), value: zig.value.neg() }], local: true, poleOnly: 'a closed-form period gives the pole part only: R̄Γ on the true kinematics was not evaluated' } };
+        const method = `the zigzag period in closed form (Brown–Schnetz, arXiv:1208.1890): S = −P(Z_${zig.loops})/(${zig.loops}ε)${glued?.ok ? '; compared with glue-and-cut' : ''}`;
+        return poleOnlyValue(bg, zig.value, method, glued?.ok ? 2 : 1, agree, 'a closed-form period gives the pole part only: R̄Γ on the true kinematics was not evaluated');
       }
       if (glued?.ok) {
         const name = (e: number) => `${bg.graph.vertices[bg.graph.edges[e]!.a]!.name}-${bg.graph.vertices[bg.graph.edges[e]!.b]!.name}`;
-        return { ok: true, value: glued.value, detail: { routing: null, routingsCompared: 1, routingsAgree: true, method: `glue-and-cut: the period from the finite integral with line ${glued.line + 1} (${name(glued.line)}) cut`, subtracted: [{ loops: loopNumber(bg.graph), value: glued.value.neg() }], local: true, poleOnly: 'glue-and-cut gives the pole part only (the period): R̄Γ on the true kinematics was not evaluated' } };
+        return poleOnlyValue(bg, glued.value, `glue-and-cut: the period from the finite integral with line ${glued.line + 1} (${name(glued.line)}) cut`, 1, true, 'glue-and-cut gives the pole part only (the period): R̄Γ on the true kinematics was not evaluated');
       }
       return { ok: false, reason: `no routing of the external momentum is both infrared safe and evaluable; ${summarize(reasons)}${glued && !glued.ok ? `; glue-and-cut: ${glued.reason}` : ''}${box && !box.ok ? `; □_p: ${box.reason}` : ''}` };
     }
@@ -225,6 +226,11 @@ export class CountertermEngine {
     const rs = irTerms ? `; R*: ${irTerms} infrared counterterm term(s)` : '';
     return { ok: true, terms, method: `${where}; ${pieces.length} term(s) of R̄${rs}; ${steps} (new integrals only)` };
   }
+}
+
+/** A counterterm from a method that gives its pole part only: `subtracted` holds −S alone. */
+function poleOnlyValue(bg: BoundGraph, value: Series, method: string, routingsCompared: number, routingsAgree: boolean, poleOnly: string): CountertermValue {
+  return { ok: true, value, detail: { routing: null, routingsCompared, routingsAgree, method, subtracted: [{ loops: loopNumber(bg.graph), value: value.neg() }], local: true, poleOnly } };
 }
 
 function seriesEqual(x: Series, y: Series): boolean {

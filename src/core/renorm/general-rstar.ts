@@ -139,17 +139,7 @@ export class GeneralRStar {
       this.log.uvCounterterms++;
       const blocks = splitAtCutVertex(g);
       if (blocks) return blocks.reduce((acc, b) => acc.mul(this.uvCounterterm(subgraphOfLines(g, b).graph)), Series.ONE);
-      const reasons: string[] = [];
-      const verts = [...touchedVertices(g.lines)].sort((a, b) => a - b);
-      for (let i = 0; i < verts.length; i++) for (let j = i + 1; j < verts.length; j++) {
-        try {
-          return this.uvCountertermOnRouting(g, verts[i]!, verts[j]!);
-        } catch (e) {
-          if (!(e instanceof NotEvaluable)) throw e;
-          reasons.push(e.message);
-        }
-      }
-      throw new NotEvaluable(`no routing gives the UV counterterm of a ${loopsOfLines(g.lines)}-loop scalar graph (${reasons[0] ?? 'no two vertices'})`);
+      return this.uvCountertermCompared(g, 1).value;
     });
   }
 
